@@ -1,0 +1,33 @@
+import { defineConfig } from '@playwright/test';
+
+const PORT = 4319;
+
+export default defineConfig({
+	testDir: 'tests/browser',
+	timeout: 60_000,
+	retries: process.env.CI ? 1 : 0,
+	workers: 1,
+	reporter: [['list']],
+	use: {
+		baseURL: `http://127.0.0.1:${PORT}`,
+		viewport: { width: 1440, height: 900 },
+		launchOptions: {
+			executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+			args: [
+				'--disable-background-networking',
+				'--disable-component-update',
+				'--disable-sync',
+				'--no-first-run',
+				'--disable-quic',
+				'--disable-gpu',
+				'--no-sandbox'
+			]
+		}
+	},
+	webServer: {
+		command: `npm run build && PORT=${PORT} HOST=127.0.0.1 node build/index.js`,
+		url: `http://127.0.0.1:${PORT}`,
+		reuseExistingServer: !process.env.CI,
+		timeout: 180_000
+	}
+});

@@ -1,0 +1,12 @@
+/** An error the CLI reports as one line on stderr with a chosen exit code, never a stack trace. */
+export class CliError extends Error {
+	readonly exitCode: number;
+	constructor(message: string, exitCode = 2) {
+		super(message);
+		this.name = 'CliError';
+		this.exitCode = exitCode;
+	}
+}
+
+/** Exit codes: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input. */
+export const EXIT = { ok: 0, checkFailed: 1, badInput: 2 } as const;

@@ -1,0 +1,62 @@
+/** `sunglyph check <design.json>`: validation, wiring and the drive verdict of a design file. */
+import { parseArgs } from 'node:util';
+import { parseDesignText } from '../../lib/core/design/parse-design';
+import { formatIssue } from '../../lib/core/design/issues';
+import { analyzeDesign } from '../../lib/core/analyze-design';
+import { CliError, EXIT } from '../cli-error';
+import type { CliIo } from '../io';
+import { driveReportLines } from '../drive-report-text';
+
+export const CHECK_HELP = `Usage: sunglyph check <design.json> [--json]
+
+Validates a design file and checks its wiring and multiplexed drive over the operating
+temperature range.
+
+Exit status: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input.
+
+  --json       print the full report as JSON
+  -h, --help   show this help`;
+
+export async function runCheck(args: string[], io: CliIo): Promise<number> {
+	const { values, positionals } = parseArgs({
+		args,
+		strict: true,
+		allowPositionals: true,
+		options: { json: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } }
+	});
+	if (values.help) {
+		io.out(CHECK_HELP + '\n');
+		return EXIT.ok;
+	}
+	if (positionals.length !== 1) throw new CliError('expected exactly one design file (see sunglyph check --help)');
+	const path = positionals[0];
+	let text: string;
+	try {
+		text = await io.readFile(path);
+	} catch (error) {
+		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
+		throw new CliError(`cannot read ${path}: ${reason}`);
+	}
+	const parsed = parseDesignText(text);
+	if (!parsed.ok) {
+		io.err(`${path}: invalid design\n` + parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') + '\n');
+		return EXIT.badInput;
+	}
+	const report = analyzeDesign(parsed.design);
+	if (values.json) {
+		io.out(JSON.stringify(report, null, 2) + '\n');
+	} else {
+		const lines = [`${parsed.design.name}`, '', 'Wiring'];
+		for (const f of report.wiring.findings) lines.push(`  ${f.severity === 'fail' ? 'FAIL' : 'ok  '}  ${f.message}`);
+		lines.push('', 'Drive');
+		lines.push(
+			...driveReportLines(report.drive, { withCell: true })
+				.join('\n')
+				.split('\n')
+				.map((l) => (l ? `  ${l}` : l))
+		);
+		lines.push('', `Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`);
+		io.out(lines.join('\n') + '\n');
+	}
+	return report.severity === 'fail' ? EXIT.checkFailed : EXIT.ok;
+}

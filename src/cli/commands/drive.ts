@@ -1,0 +1,95 @@
+/** `sunglyph drive`: RMS levels of a multiplexed drive, optionally against a cell's thresholds. */
+import { parseArgs } from 'node:util';
+import { analyzeDrive } from '../../lib/core/drive/analyze-drive';
+import { parseBias, parseInteger, parseNumber } from '../parse-numbers';
+import { CliError, EXIT } from '../cli-error';
+import type { CliIo } from '../io';
+import { driveReportLines } from '../drive-report-text';
+
+export const DRIVE_HELP = `Usage: sunglyph drive --commons N --bias 1/a --volts V [options]
+
+RMS voltages, selection ratio and the Alt–Pleshko limit of a multiplexed segment drive.
+
+  --commons N        number of commons (duty 1/N); 1 is static drive        (required)
+  --bias 1/a         bias, e.g. 1/3 (non-integer divisors allowed)          (default 1/3)
+  --volts V          drive amplitude (LCD supply) in volts                  (required)
+  --v10 V --v90 V    the cell's 10 % and 90 % voltages at the reference temperature: adds
+                     the operating window and a verdict
+  --reference-c T    reference temperature of --v10/--v90 in °C             (default 25)
+  --tc-mv-per-k K    temperature coefficient of V10/V90 in mV/K             (default 0)
+  --min-c T --max-c T operating temperature range in °C                    (default the reference)
+  --json             print a JSON object instead of a table
+  -h, --help         show this help`;
+
+export function runDrive(args: string[], io: CliIo): number {
+	const { values } = parseArgs({
+		args,
+		strict: true,
+		allowPositionals: false,
+		options: {
+			commons: { type: 'string' },
+			bias: { type: 'string' },
+			volts: { type: 'string' },
+			v10: { type: 'string' },
+			v90: { type: 'string' },
+			'reference-c': { type: 'string' },
+			'tc-mv-per-k': { type: 'string' },
+			'min-c': { type: 'string' },
+			'max-c': { type: 'string' },
+			json: { type: 'boolean' },
+			help: { type: 'boolean', short: 'h' }
+		}
+	});
+	if (values.help) {
+		io.out(DRIVE_HELP + '\n');
+		return EXIT.ok;
+	}
+	if (values.commons === undefined) throw new CliError('--commons is required (e.g. --commons 4)');
+	if (values.volts === undefined) throw new CliError('--volts is required (e.g. --volts 3.0)');
+	const commons = parseInteger('commons', values.commons);
+	if (commons < 1 || commons > 256) throw new CliError(`--commons: ${commons} is outside 1–256`);
+	const biasDivisor = values.bias === undefined ? 3 : parseBias(values.bias);
+	const amplitude_V = parseNumber('volts', values.volts);
+	if (amplitude_V <= 0) throw new CliError('--volts: expected a voltage above 0');
+	const hasCell = values.v10 !== undefined || values.v90 !== undefined;
+	if (hasCell && (values.v10 === undefined || values.v90 === undefined)) {
+		throw new CliError('--v10 and --v90 go together');
+	}
+	const reference_C = values['reference-c'] === undefined ? 25 : parseNumber('reference-c', values['reference-c']);
+	const v10_V = hasCell ? parseNumber('v10', values.v10) : 1;
+	const v90_V = hasCell ? parseNumber('v90', values.v90) : 1.5;
+	if (hasCell && !(v10_V > 0 && v90_V > v10_V)) throw new CliError('--v90 must exceed --v10, both above 0');
+	const min_C = values['min-c'] === undefined ? reference_C : parseNumber('min-c', values['min-c']);
+	const max_C = values['max-c'] === undefined ? reference_C : parseNumber('max-c', values['max-c']);
+	if (min_C > max_C) throw new CliError('--min-c must not exceed --max-c');
+	const report = analyzeDrive({
+		drive: { commons, biasDivisor, amplitude_V, frameRate_Hz: 64, inversion: 'line', temperature: { min_C, max_C } },
+		thresholds: {
+			source: 'manual',
+			v10_V,
+			v90_V,
+			reference_C,
+			tempCoeff_mV_per_K: values['tc-mv-per-k'] === undefined ? 0 : parseNumber('tc-mv-per-k', values['tc-mv-per-k'])
+		}
+	});
+	if (values.json) {
+		const json = {
+			commons,
+			biasDivisor,
+			amplitude_V,
+			static: report.isStatic,
+			onRms_V: report.onRms_V,
+			offRms_V: report.offRms_V,
+			selectionRatio: report.selectionRatio,
+			altPleshkoLimit: report.altPleshkoLimit,
+			optimalBias: report.optimalBias,
+			...(hasCell
+				? { window: report.window.window, best_V: report.window.best_V, margin_V: report.window.margin_V, margin_percent: report.window.margin_percent, severity: report.severity, findings: report.findings }
+				: {})
+		};
+		io.out(JSON.stringify(json, null, 2) + '\n');
+	} else {
+		io.out(driveReportLines(report, { withCell: hasCell }).join('\n') + '\n');
+	}
+	return hasCell && report.severity === 'fail' ? EXIT.checkFailed : EXIT.ok;
+}

@@ -1,0 +1,52 @@
+/**
+ * Migration hook for design documents: each step lifts a raw document from version n to n + 1.
+ * Loading a file runs every step from its version up to DESIGN_VERSION, on a copy, before the
+ * schema sees it. A newer file than this build understands is refused, never guessed at.
+ */
+import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
+
+export type RawDocument = Record<string, unknown>;
+/** migrations[n] lifts a version-n document to version n + 1. */
+export type MigrationTable = Readonly<Record<number, (doc: RawDocument) => RawDocument>>;
+
+/** Version 1 is the first published format, so there is nothing to lift yet. */
+export const DESIGN_MIGRATIONS: MigrationTable = {};
+
+export type MigrationResult =
+	| { ok: true; document: RawDocument; from: number }
+	| { ok: false; path: string; message: string };
+
+export function migrateDocument(
+	raw: unknown,
+	options: { migrations?: MigrationTable; targetVersion?: number } = {}
+): MigrationResult {
+	const migrations = options.migrations ?? DESIGN_MIGRATIONS;
+	const target = options.targetVersion ?? DESIGN_VERSION;
+	if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+		return { ok: false, path: '(root)', message: 'expected a JSON object' };
+	}
+	const doc = raw as RawDocument;
+	if (doc.format !== DESIGN_FORMAT) {
+		return { ok: false, path: 'format', message: `expected "${DESIGN_FORMAT}"` };
+	}
+	const from = doc.version;
+	if (typeof from !== 'number' || !Number.isInteger(from) || from < 1) {
+		return { ok: false, path: 'version', message: 'expected a whole version number of at least 1' };
+	}
+	if (from > target) {
+		return {
+			ok: false,
+			path: 'version',
+			message: `version ${from} is newer than this build understands (${target}); update sunglyph`
+		};
+	}
+	let current: RawDocument = structuredClone(doc);
+	for (let version = from; version < target; version++) {
+		const step = migrations[version];
+		if (!step) {
+			return { ok: false, path: 'version', message: `no migration from version ${version}` };
+		}
+		current = { ...step(current), version: version + 1 };
+	}
+	return { ok: true, document: current, from };
+}

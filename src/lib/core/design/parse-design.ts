@@ -1,0 +1,46 @@
+/**
+ * Turns JSON text or a parsed value into a validated Design, or into a list of issues that each
+ * name a JSON path. Nothing is half-applied: either the whole document is valid or no design is
+ * returned.
+ */
+import { designSchemaV1, type Design } from './schema';
+import { formatJsonPath, type DesignIssue } from './issues';
+import { migrateDocument, type MigrationTable } from './migrations';
+import { checkReferences } from './references';
+
+export type ParseResult = { ok: true; design: Design } | { ok: false; issues: DesignIssue[] };
+
+export function parseDesignValue(
+	raw: unknown,
+	options: { migrations?: MigrationTable } = {}
+): ParseResult {
+	const migrated = migrateDocument(raw, options);
+	if (!migrated.ok) return { ok: false, issues: [{ path: migrated.path, message: migrated.message }] };
+	const parsed = designSchemaV1.safeParse(migrated.document);
+	if (!parsed.success) {
+		const issues = parsed.error.issues.map((issue) => ({
+			path: formatJsonPath(issue.path),
+			message: issue.message
+		}));
+		return { ok: false, issues };
+	}
+	const referenceIssues = checkReferences(parsed.data);
+	if (referenceIssues.length > 0) return { ok: false, issues: referenceIssues };
+	return { ok: true, design: parsed.data };
+}
+
+export function parseDesignText(text: string): ParseResult {
+	let raw: unknown;
+	try {
+		raw = JSON.parse(text);
+	} catch (error) {
+		const reason = error instanceof Error ? error.message : String(error);
+		return { ok: false, issues: [{ path: '(root)', message: `not valid JSON: ${reason}` }] };
+	}
+	return parseDesignValue(raw);
+}
+
+/** Serialises a design as stable, human-diffable JSON. */
+export function serializeDesign(design: Design): string {
+	return JSON.stringify(design, null, '\t') + '\n';
+}
