@@ -42,6 +42,7 @@ export function driveReportLines(report: DriveReport, options: { withCell: boole
 			`amplitude window ${fixed(window.window.min_V, 3)}–${fixed(window.window.max_V, 3)} V, best ${fixed(window.best_V, 3)} V`
 		);
 	}
-	for (const finding of report.findings) lines.push(`${MARK[finding.severity]}  ${finding.message}`);
+	for (const finding of report.findings)
+		lines.push(`${MARK[finding.severity]}  ${finding.message}`);
 	return lines;
 }

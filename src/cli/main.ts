@@ -48,7 +48,11 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 			io.err(`sunglyph ${name}: ${error.message}\n`);
 			return error.exitCode;
 		}
-		if (error instanceof Error && 'code' in error && String(error.code).startsWith('ERR_PARSE_ARGS')) {
+		if (
+			error instanceof Error &&
+			'code' in error &&
+			String(error.code).startsWith('ERR_PARSE_ARGS')
+		) {
 			io.err(`sunglyph ${name}: ${error.message}\n`);
 			return EXIT.badInput;
 		}

@@ -1,8 +1,10 @@
 /** Strict parsing of numeric option values: anything but a clean finite number is an error. */
 import { CliError } from './cli-error';
+import { parseBiasText } from '../lib/core/drive/bias-text';
 
 export function parseNumber(option: string, text: string | undefined): number {
-	if (text === undefined || text.trim() === '') throw new CliError(`--${option}: expected a number`);
+	if (text === undefined || text.trim() === '')
+		throw new CliError(`--${option}: expected a number`);
 	const value = Number(text);
 	if (!Number.isFinite(value)) throw new CliError(`--${option}: "${text}" is not a number`);
 	return value;
@@ -17,11 +19,9 @@ export function parseInteger(option: string, text: string | undefined): number {
 /** Bias written as "1/3", "1/3.5" or the divisor alone ("3"); returns the divisor a. */
 export function parseBias(text: string | undefined): number {
 	if (text === undefined) throw new CliError('--bias: expected a value such as 1/3');
-	const match = /^\s*(?:1\s*\/\s*)?([0-9]*\.?[0-9]+)\s*$/.exec(text);
-	const divisor = match ? Number(match[1]) : NaN;
-	if (!Number.isFinite(divisor)) throw new CliError(`--bias: "${text}" is not a bias such as 1/3`);
-	if (divisor < 2) throw new CliError(`--bias: 1/${divisor} is not a usable bias (need 1/2 or smaller)`);
-	return divisor;
+	const result = parseBiasText(text);
+	if (!result.ok) throw new CliError(`--bias: ${result.message}`);
+	return result.divisor;
 }
 
 /**
@@ -32,7 +32,12 @@ export function joinNegativeValues(args: readonly string[]): string[] {
 	const out: string[] = [];
 	for (let i = 0; i < args.length; i++) {
 		const next = args[i + 1];
-		if (args[i].startsWith('--') && !args[i].includes('=') && next !== undefined && /^-\d|^-\.\d/.test(next)) {
+		if (
+			args[i].startsWith('--') &&
+			!args[i].includes('=') &&
+			next !== undefined &&
+			/^-\d|^-\.\d/.test(next)
+		) {
 			out.push(`${args[i]}=${next}`);
 			i++;
 		} else {

@@ -1,9 +1,12 @@
 /** Plain-text tables for terminal output: left-aligned labels, right-aligned figures. */
 export function formatTable(rows: readonly (readonly string[])[]): string {
 	const widths: number[] = [];
-	for (const row of rows) row.forEach((cell, i) => (widths[i] = Math.max(widths[i] ?? 0, cell.length)));
+	for (const row of rows)
+		row.forEach((cell, i) => (widths[i] = Math.max(widths[i] ?? 0, cell.length)));
 	return rows
-		.map((row) => row.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]) : cell.padStart(widths[i]))).join('  '))
+		.map((row) =>
+			row.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]) : cell.padStart(widths[i]))).join('  ')
+		)
 		.join('\n');
 }
 

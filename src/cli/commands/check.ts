@@ -28,7 +28,8 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 		io.out(CHECK_HELP + '\n');
 		return EXIT.ok;
 	}
-	if (positionals.length !== 1) throw new CliError('expected exactly one design file (see sunglyph check --help)');
+	if (positionals.length !== 1)
+		throw new CliError('expected exactly one design file (see sunglyph check --help)');
 	const path = positionals[0];
 	let text: string;
 	try {
@@ -39,7 +40,11 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 	}
 	const parsed = parseDesignText(text);
 	if (!parsed.ok) {
-		io.err(`${path}: invalid design\n` + parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') + '\n');
+		io.err(
+			`${path}: invalid design\n` +
+				parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') +
+				'\n'
+		);
 		return EXIT.badInput;
 	}
 	const report = analyzeDesign(parsed.design);
@@ -47,7 +52,8 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 		io.out(JSON.stringify(report, null, 2) + '\n');
 	} else {
 		const lines = [`${parsed.design.name}`, '', 'Wiring'];
-		for (const f of report.wiring.findings) lines.push(`  ${f.severity === 'fail' ? 'FAIL' : 'ok  '}  ${f.message}`);
+		for (const f of report.wiring.findings)
+			lines.push(`  ${f.severity === 'fail' ? 'FAIL' : 'ok  '}  ${f.message}`);
 		lines.push('', 'Drive');
 		lines.push(
 			...driveReportLines(report.drive, { withCell: true })
@@ -55,7 +61,10 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 				.split('\n')
 				.map((l) => (l ? `  ${l}` : l))
 		);
-		lines.push('', `Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`);
+		lines.push(
+			'',
+			`Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`
+		);
 		io.out(lines.join('\n') + '\n');
 	}
 	return report.severity === 'fail' ? EXIT.checkFailed : EXIT.ok;

@@ -11,7 +11,12 @@ Writes the demo design (a fictional irrigation controller's readout) as JSON to 
 e.g.  sunglyph demo > controller.json`;
 
 export function runDemo(args: string[], io: CliIo): number {
-	const { values } = parseArgs({ args, strict: true, allowPositionals: false, options: { help: { type: 'boolean', short: 'h' } } });
+	const { values } = parseArgs({
+		args,
+		strict: true,
+		allowPositionals: false,
+		options: { help: { type: 'boolean', short: 'h' } }
+	});
 	io.out(values.help ? DEMO_HELP + '\n' : serializeDesign(demoDesign()));
 	return EXIT.ok;
 }

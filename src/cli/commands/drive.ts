@@ -55,21 +55,31 @@ export function runDrive(args: string[], io: CliIo): number {
 	if (hasCell && (values.v10 === undefined || values.v90 === undefined)) {
 		throw new CliError('--v10 and --v90 go together');
 	}
-	const reference_C = values['reference-c'] === undefined ? 25 : parseNumber('reference-c', values['reference-c']);
+	const reference_C =
+		values['reference-c'] === undefined ? 25 : parseNumber('reference-c', values['reference-c']);
 	const v10_V = hasCell ? parseNumber('v10', values.v10) : 1;
 	const v90_V = hasCell ? parseNumber('v90', values.v90) : 1.5;
-	if (hasCell && !(v10_V > 0 && v90_V > v10_V)) throw new CliError('--v90 must exceed --v10, both above 0');
+	if (hasCell && !(v10_V > 0 && v90_V > v10_V))
+		throw new CliError('--v90 must exceed --v10, both above 0');
 	const min_C = values['min-c'] === undefined ? reference_C : parseNumber('min-c', values['min-c']);
 	const max_C = values['max-c'] === undefined ? reference_C : parseNumber('max-c', values['max-c']);
 	if (min_C > max_C) throw new CliError('--min-c must not exceed --max-c');
 	const report = analyzeDrive({
-		drive: { commons, biasDivisor, amplitude_V, frameRate_Hz: 64, inversion: 'line', temperature: { min_C, max_C } },
+		drive: {
+			commons,
+			biasDivisor,
+			amplitude_V,
+			frameRate_Hz: 64,
+			inversion: 'line',
+			temperature: { min_C, max_C }
+		},
 		thresholds: {
 			source: 'manual',
 			v10_V,
 			v90_V,
 			reference_C,
-			tempCoeff_mV_per_K: values['tc-mv-per-k'] === undefined ? 0 : parseNumber('tc-mv-per-k', values['tc-mv-per-k'])
+			tempCoeff_mV_per_K:
+				values['tc-mv-per-k'] === undefined ? 0 : parseNumber('tc-mv-per-k', values['tc-mv-per-k'])
 		}
 	});
 	if (values.json) {
@@ -84,7 +94,14 @@ export function runDrive(args: string[], io: CliIo): number {
 			altPleshkoLimit: report.altPleshkoLimit,
 			optimalBias: report.optimalBias,
 			...(hasCell
-				? { window: report.window.window, best_V: report.window.best_V, margin_V: report.window.margin_V, margin_percent: report.window.margin_percent, severity: report.severity, findings: report.findings }
+				? {
+						window: report.window.window,
+						best_V: report.window.best_V,
+						margin_V: report.window.margin_V,
+						margin_percent: report.window.margin_percent,
+						severity: report.severity,
+						findings: report.findings
+					}
 				: {})
 		};
 		io.out(JSON.stringify(json, null, 2) + '\n');

@@ -8,7 +8,7 @@ import type { Design } from './schema';
 import { DesignError } from './issues';
 
 export function demoDesign(): Design {
-	const result = parseDesignValue(structuredClone(demoJson));
+	const result = parseDesignValue(JSON.parse(JSON.stringify(demoJson)));
 	if (!result.ok) throw new DesignError(result.issues);
 	return result.design;
 }

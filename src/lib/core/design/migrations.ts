@@ -13,8 +13,7 @@ export type MigrationTable = Readonly<Record<number, (doc: RawDocument) => RawDo
 export const DESIGN_MIGRATIONS: MigrationTable = {};
 
 export type MigrationResult =
-	| { ok: true; document: RawDocument; from: number }
-	| { ok: false; path: string; message: string };
+	{ ok: true; document: RawDocument; from: number } | { ok: false; path: string; message: string };
 
 export function migrateDocument(
 	raw: unknown,
@@ -40,7 +39,7 @@ export function migrateDocument(
 			message: `version ${from} is newer than this build understands (${target}); update sunglyph`
 		};
 	}
-	let current: RawDocument = structuredClone(doc);
+	let current: RawDocument = JSON.parse(JSON.stringify(doc));
 	for (let version = from; version < target; version++) {
 		const step = migrations[version];
 		if (!step) {

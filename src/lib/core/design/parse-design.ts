@@ -15,7 +15,8 @@ export function parseDesignValue(
 	options: { migrations?: MigrationTable } = {}
 ): ParseResult {
 	const migrated = migrateDocument(raw, options);
-	if (!migrated.ok) return { ok: false, issues: [{ path: migrated.path, message: migrated.message }] };
+	if (!migrated.ok)
+		return { ok: false, issues: [{ path: migrated.path, message: migrated.message }] };
 	const parsed = designSchemaV1.safeParse(migrated.document);
 	if (!parsed.success) {
 		const issues = parsed.error.issues.map((issue) => ({

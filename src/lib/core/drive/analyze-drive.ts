@@ -48,11 +48,19 @@ export function analyzeDrive(options: {
 	const points = Array.isArray(options.thresholds)
 		? (options.thresholds as readonly ThresholdPoint[])
 		: thresholdsOverRange(options.thresholds as Thresholds, drive.temperature);
-	const levels = { commons: drive.commons, biasDivisor: drive.biasDivisor, amplitude_V: drive.amplitude_V };
+	const levels = {
+		commons: drive.commons,
+		biasDivisor: drive.biasDivisor,
+		amplitude_V: drive.amplitude_V
+	};
 	const rms = rmsVoltages(levels);
 	const isStatic = isStaticDrive(drive.commons);
 	const window = operatingWindow({ ...levels, thresholds: points });
-	const findings = windowFindings({ result: window, amplitude_V: drive.amplitude_V, selectionRatio: rms.selectionRatio });
+	const findings = windowFindings({
+		result: window,
+		amplitude_V: drive.amplitude_V,
+		selectionRatio: rms.selectionRatio
+	});
 	const steepness = Math.max(...points.map((p) => p.v90_V / p.v10_V));
 	if (!isStatic) {
 		const optimum = optimalBiasDivisor(drive.commons);

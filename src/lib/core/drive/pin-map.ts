@@ -36,7 +36,11 @@ export function pinMap(design: Design): PinMap {
 		linesUsed.add(electrode.line);
 		commonsUsed.add(electrode.common);
 		const key = `${electrode.common}\u0000${electrode.line}`;
-		const entry = byCrossing.get(key) ?? { common: electrode.common, line: electrode.line, electrodes: [] };
+		const entry = byCrossing.get(key) ?? {
+			common: electrode.common,
+			line: electrode.line,
+			electrodes: []
+		};
 		entry.electrodes.push(electrode.name || electrode.id);
 		byCrossing.set(key, entry);
 	}

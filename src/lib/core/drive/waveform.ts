@@ -59,7 +59,10 @@ export function multiplexWaveform(options: DriveLevels & { inversion: InversionS
 }
 
 /** RMS and mean (DC) of the voltage across a pixel: segment minus common over the cycle. */
-export function pixelVoltageStats(common: Float64Array, segment: Float64Array): { rms_V: number; dc_V: number } {
+export function pixelVoltageStats(
+	common: Float64Array,
+	segment: Float64Array
+): { rms_V: number; dc_V: number } {
 	let sum = 0;
 	let sumSquares = 0;
 	for (let t = 0; t < common.length; t++) {

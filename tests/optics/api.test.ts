@@ -1,0 +1,69 @@
+import { describe, expect, it } from 'vitest';
+import * as optics from '../../src/lib/core/optics/index';
+
+describe('optics public API', () => {
+	it('exports exactly the documented names', () => {
+		expect(Object.keys(optics).sort()).toMatchInlineSnapshot(`
+			[
+			  "BRUSHED_METAL_DEPOLARIZED_FRACTION",
+			  "BRUSHED_METAL_REFLECTANCE",
+			  "DIFFUSE_WHITE_REFLECTANCE",
+			  "FRONT_SURFACE_REFLECTANCE_DEFAULT",
+			  "IDEAL_POLARIZER",
+			  "NEUTRAL_GREY_POLARIZER",
+			  "TRANSFLECTIVE_REFLECTANCE",
+			  "TRANSFLECTIVE_TRANSMITTANCE",
+			  "assertDirectorProfile",
+			  "backwardJones",
+			  "complex2x2",
+			  "createStackEvaluator",
+			  "createStackSpectra",
+			  "crossedPairTransmittance",
+			  "effectiveExtraordinaryIndex",
+			  "fresnelNormalReflectance",
+			  "iodinePvaTransmittances",
+			  "jonesOfProfile",
+			  "jonesOfSlicedProfile",
+			  "jonesOfTwistedLayer",
+			  "parallelPairTransmittance",
+			  "polarizerJones",
+			  "polarizingEfficiency",
+			  "reflectiveStackForMode",
+			  "retardationOf",
+			  "sampleIndices",
+			  "samplePolarizer",
+			  "sampleReflector",
+			  "sampleSpectralValue",
+			  "singlePassTransmittance",
+			  "singlePolarizerTransmittance",
+			  "sliceDirectorProfile",
+			  "spectralValueAt",
+			  "stackReflectance",
+			  "stackSpectra",
+			  "toMirroredFrame",
+			  "twistFrameMatrix",
+			  "uniformTwistProfile",
+			  "unpolarizedTransmittance",
+			]
+		`);
+		expect(Object.keys(optics.complex2x2).sort()).toMatchInlineSnapshot(`
+			[
+			  "JONES_MATRIX_LENGTH",
+			  "JONES_VECTOR_LENGTH",
+			  "applyToVector",
+			  "copy",
+			  "createMatrix",
+			  "createVector",
+			  "determinant",
+			  "diagonalReal",
+			  "diagonalRetarder",
+			  "frobeniusNormSquared",
+			  "identity",
+			  "multiply",
+			  "rotation",
+			  "transpose",
+			  "vectorIntensity",
+			]
+		`);
+	});
+});
