@@ -10,6 +10,7 @@ import type { Contour, Design, Electrode, Point } from '../src/lib/core/design/s
 import { DESIGN_FORMAT, DESIGN_VERSION } from '../src/lib/core/design/schema';
 import { sevenSegmentDigit, SEVEN_SEGMENT_NAMES } from '../src/lib/core/glyphs/seven-segment';
 import { serializeDesign } from '../src/lib/core/design/parse-design';
+import { DEFAULT_CELL } from '../src/lib/core/design/cell-schema';
 
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 const pt = (x: number, y: number, inH?: [number, number], outH?: [number, number]): Point => ({
@@ -69,21 +70,39 @@ digitX.forEach((x, index) => {
 		generator: { kind: 'seven-segment', params: { ...digit, x_mm: x, y_mm: digitTop } }
 	});
 });
-add({ id: 'colU', name: 'COL upper', kind: 'segment', outline: rect(27.9, digitTop + 2.8, 1.4, 1.4) });
-add({ id: 'colL', name: 'COL lower', kind: 'segment', outline: rect(27.2, digitTop + 7.8, 1.4, 1.4) });
+add({
+	id: 'colU',
+	name: 'COL upper',
+	kind: 'segment',
+	outline: rect(27.9, digitTop + 2.8, 1.4, 1.4)
+});
+add({
+	id: 'colL',
+	name: 'COL lower',
+	kind: 'segment',
+	outline: rect(27.2, digitTop + 7.8, 1.4, 1.4)
+});
 
 // Ten-step soil-moisture bar under the digits.
 const bars: string[] = [];
 for (let i = 0; i < 10; i++) {
 	bars.push(
-		add({ id: `bar${i + 1}`, name: `BAR${i + 1}`, kind: 'segment', outline: rect(8 + i * 4.8, 29.5, 4.2, 2.2) })
+		add({
+			id: `bar${i + 1}`,
+			name: `BAR${i + 1}`,
+			kind: 'segment',
+			outline: rect(8 + i * 4.8, 29.5, 4.2, 2.2)
+		})
 	);
 }
 groups.push({
 	id: 'moisture',
 	name: 'Moisture bar',
 	members: bars,
-	generator: { kind: 'bar-graph', params: { count: 10, x_mm: 8, y_mm: 29.5, width_mm: 4.2, height_mm: 2.2, pitch_mm: 4.8 } }
+	generator: {
+		kind: 'bar-graph',
+		params: { count: 10, x_mm: 8, y_mm: 29.5, width_mm: 4.2, height_mm: 2.2, pitch_mm: 4.8 }
+	}
 });
 
 // Battery gauge: a frame with a terminal nub, and three level cells inside.
@@ -93,11 +112,25 @@ add({
 	id: 'batFrame',
 	name: 'Battery frame',
 	kind: 'icon',
-	outline: [pt(bx, by), pt(bx + 6.4, by), pt(bx + 6.4, by + 1), pt(bx + 7, by + 1), pt(bx + 7, by + 2.6), pt(bx + 6.4, by + 2.6), pt(bx + 6.4, by + 3.6), pt(bx, by + 3.6)],
+	outline: [
+		pt(bx, by),
+		pt(bx + 6.4, by),
+		pt(bx + 6.4, by + 1),
+		pt(bx + 7, by + 1),
+		pt(bx + 7, by + 2.6),
+		pt(bx + 6.4, by + 2.6),
+		pt(bx + 6.4, by + 3.6),
+		pt(bx, by + 3.6)
+	],
 	holes: [rect(bx + 0.45, by + 0.45, 5.5, 2.7)]
 });
 for (let i = 0; i < 3; i++) {
-	add({ id: `bat${i + 1}`, name: `Battery ${i + 1}`, kind: 'icon', outline: rect(bx + 0.7 + i * 1.72, by + 0.7, 1.55, 2.2) });
+	add({
+		id: `bat${i + 1}`,
+		name: `Battery ${i + 1}`,
+		kind: 'icon',
+		outline: rect(bx + 0.7 + i * 1.72, by + 0.7, 1.55, 2.2)
+	});
 }
 
 // Droplet (watering active): a pointed top and a round belly.
@@ -105,7 +138,16 @@ add({
 	id: 'drop',
 	name: 'Droplet',
 	kind: 'icon',
-	outline: moved([pt(2.2, 0), pt(4.1, 3.5, [-0.55, -1.1], [0.45, 0.95]), pt(2.2, 5.4, [1.15, 0], [-1.15, 0]), pt(0.3, 3.5, [-0.45, 0.95], [0.55, -1.1])], 17, 4.6)
+	outline: moved(
+		[
+			pt(2.2, 0),
+			pt(4.1, 3.5, [-0.55, -1.1], [0.45, 0.95]),
+			pt(2.2, 5.4, [1.15, 0], [-1.15, 0]),
+			pt(0.3, 3.5, [-0.45, 0.95], [0.55, -1.1])
+		],
+		17,
+		4.6
+	)
 });
 
 // Clock (schedule): a disc with its hands cut out.
@@ -114,7 +156,9 @@ add({
 	name: 'Clock',
 	kind: 'icon',
 	outline: circle(27.4, 7.3, 2.7),
-	holes: [[pt(27.1, 5.3), pt(27.7, 5.3), pt(27.7, 7.0), pt(29.2, 7.0), pt(29.2, 7.6), pt(27.1, 7.6)]]
+	holes: [
+		[pt(27.1, 5.3), pt(27.7, 5.3), pt(27.7, 7.0), pt(29.2, 7.0), pt(29.2, 7.6), pt(27.1, 7.6)]
+	]
 });
 
 // Alarm bell with its clapper joined to the rim.
@@ -150,7 +194,16 @@ add({
 	id: 'rain',
 	name: 'Rain pause',
 	kind: 'icon',
-	outline: [pt(44, 8.6, undefined, [0, -3.6]), pt(51, 8.6, [0, -3.6]), pt(47.8, 8.6), pt(47.8, 10.4, undefined, [0, 0.9]), pt(45.8, 10.4, [0, 0.9], [0, -0.3]), pt(46.4, 10.1, [0, -0.3], [0, 0.5]), pt(47.2, 10.1, [0, 0.5]), pt(47.2, 8.6)]
+	outline: [
+		pt(44, 8.6, undefined, [0, -3.6]),
+		pt(51, 8.6, [0, -3.6]),
+		pt(47.8, 8.6),
+		pt(47.8, 10.4, undefined, [0, 0.9]),
+		pt(45.8, 10.4, [0, 0.9], [0, -0.3]),
+		pt(46.4, 10.1, [0, -0.3], [0, 0.5]),
+		pt(47.2, 10.1, [0, 0.5]),
+		pt(47.2, 8.6)
+	]
 });
 
 // Wiring: digit k uses two lines; a, f, e, d on the first and b, g, c, DP on the second.
@@ -180,7 +233,11 @@ const design: Design = {
 	format: DESIGN_FORMAT,
 	version: DESIGN_VERSION,
 	name: 'Rillwise RC-4 irrigation controller (demo)',
-	glass: { width_mm: 66, height_mm: 42, viewingArea: { x_mm: 4, y_mm: 3, width_mm: 58, height_mm: 32 } },
+	glass: {
+		width_mm: 66,
+		height_mm: 42,
+		viewingArea: { x_mm: 4, y_mm: 3, width_mm: 58, height_mm: 32 }
+	},
 	commons,
 	segmentLines: lines,
 	electrodes,
@@ -194,7 +251,9 @@ const design: Design = {
 		temperature: { min_C: -10, max_C: 60 }
 	},
 	thresholds: { source: 'manual', v10_V: 1.3, v90_V: 1.7, reference_C: 25, tempCoeff_mV_per_K: -3 },
-	viewing: { distance_mm: 600 }
+	viewing: { distance_mm: 600 },
+	cell: DEFAULT_CELL,
+	lighting: { illuminant: 'D65', observer: 2, illuminance_lx: 500 }
 };
 
 const target = new URL('../src/lib/core/design/demo-design.json', import.meta.url);

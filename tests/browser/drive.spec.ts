@@ -30,7 +30,7 @@ test('an invalid file shows path-named errors and keeps the open design', async 
 	await page.goto('/');
 	const broken = JSON.stringify({
 		format: 'sunglyph-design',
-		version: 1,
+		version: 2,
 		name: 'x',
 		glass: { width_mm: -3 }
 	});

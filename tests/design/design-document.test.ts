@@ -9,6 +9,7 @@ import { demoDesign } from '../../src/lib/core/design/demo';
 import { migrateDocument } from '../../src/lib/core/design/migrations';
 import type { Design, Electrode } from '../../src/lib/core/design/schema';
 import { analyzeDesign } from '../../src/lib/core/analyze-design';
+import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-schema';
 
 // JSON has no negative zero, so −0 and 0 are the same coordinate in a saved design.
 const finite = fc
@@ -56,7 +57,7 @@ const designArb: fc.Arbitrary<Design> = fc
 		}));
 		return {
 			format: 'sunglyph-design',
-			version: 1,
+			version: 2,
 			name: 'random',
 			glass: {
 				width_mm: 50,
@@ -82,7 +83,9 @@ const designArb: fc.Arbitrary<Design> = fc
 				reference_C: 25,
 				tempCoeff_mV_per_K: -4
 			},
-			viewing: { distance_mm: 500 }
+			viewing: { distance_mm: 500 },
+			cell: { ...DEFAULT_CELL, gap_um: 3 + (commons % 5) },
+			lighting: DEFAULT_LIGHTING
 		} satisfies Design;
 	});
 
@@ -166,6 +169,28 @@ describe('design document', () => {
 			path: 'version'
 		});
 		expect(migrateDocument([])).toMatchObject({ ok: false, path: '(root)' });
+	});
+
+	it('lifts a version-1 file to version 2 with the default cell and light', () => {
+		const v1 = JSON.parse(serializeDesign(demoDesign()));
+		v1.version = 1;
+		delete v1.cell;
+		delete v1.lighting;
+		const result = parseDesignValue(v1);
+		expect(result.ok).toBe(true);
+		if (result.ok) {
+			expect(result.design.version).toBe(2);
+			expect(result.design.cell).toEqual(DEFAULT_CELL);
+			expect(result.design.lighting).toEqual(DEFAULT_LIGHTING);
+			expect(result.design.electrodes).toEqual(demoDesign().electrodes);
+		}
+	});
+
+	it('names an unknown material preset', () => {
+		const doc = JSON.parse(serializeDesign(demoDesign()));
+		doc.cell.material = { preset: 'unobtainium' };
+		const result = parseDesignValue(doc);
+		expect(result.ok ? [] : result.issues.map((i) => i.path)).toEqual(['cell.material.preset']);
 	});
 
 	it('runs every migration step in order, on a copy', () => {

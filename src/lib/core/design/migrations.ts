@@ -4,13 +4,20 @@
  * schema sees it. A newer file than this build understands is refused, never guessed at.
  */
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
+import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
 export type MigrationTable = Readonly<Record<number, (doc: RawDocument) => RawDocument>>;
 
-/** Version 1 is the first published format, so there is nothing to lift yet. */
-export const DESIGN_MIGRATIONS: MigrationTable = {};
+export const DESIGN_MIGRATIONS: MigrationTable = {
+	/** Version 2 adds the cell (fluid, stack, reflector) and the ambient light, with defaults. */
+	1: (doc) => ({
+		...doc,
+		cell: doc.cell ?? JSON.parse(JSON.stringify(DEFAULT_CELL)),
+		lighting: doc.lighting ?? { ...DEFAULT_LIGHTING }
+	})
+};
 
 export type MigrationResult =
 	{ ok: true; document: RawDocument; from: number } | { ok: false; path: string; message: string };

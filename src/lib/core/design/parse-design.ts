@@ -3,7 +3,7 @@
  * name a JSON path. Nothing is half-applied: either the whole document is valid or no design is
  * returned.
  */
-import { designSchemaV1, type Design } from './schema';
+import { designSchema, type Design } from './schema';
 import { formatJsonPath, type DesignIssue } from './issues';
 import { migrateDocument, type MigrationTable } from './migrations';
 import { checkReferences } from './references';
@@ -17,7 +17,7 @@ export function parseDesignValue(
 	const migrated = migrateDocument(raw, options);
 	if (!migrated.ok)
 		return { ok: false, issues: [{ path: migrated.path, message: migrated.message }] };
-	const parsed = designSchemaV1.safeParse(migrated.document);
+	const parsed = designSchema.safeParse(migrated.document);
 	if (!parsed.success) {
 		const issues = parsed.error.issues.map((issue) => ({
 			path: formatJsonPath(issue.path),

@@ -4,6 +4,7 @@
  */
 import type { Design } from './schema';
 import type { DesignIssue } from './issues';
+import { LC_PRESETS, presetById } from '../lc/presets';
 
 function duplicateIds(
 	items: readonly { id: string }[],
@@ -50,5 +51,11 @@ export function checkReferences(design: Design): DesignIssue[] {
 			}
 		});
 	});
+	if ('preset' in design.cell.material && !presetById(design.cell.material.preset)) {
+		issues.push({
+			path: 'cell.material.preset',
+			message: `unknown preset "${design.cell.material.preset}" (known: ${LC_PRESETS.map((m) => m.id).join(', ')})`
+		});
+	}
 	return issues;
 }

@@ -1,5 +1,5 @@
 /**
- * The sunglyph design document, version 1: the schema is the single source of truth and the
+ * The sunglyph design document, version 2: the schema is the single source of truth and the
  * TypeScript types are derived from it.
  *
  * Units: all lengths in millimetres (suffix `_mm`), voltages in volts (`_V`), frequencies in hertz
@@ -11,9 +11,10 @@
  * the outline (even-odd fill).
  */
 import { z } from 'zod';
+import { cellSchema, lightingSchema } from './cell-schema';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
-export const DESIGN_VERSION = 1;
+export const DESIGN_VERSION = 2;
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
@@ -106,7 +107,7 @@ export const thresholdSchema = z
 
 export const viewingSchema = z.strictObject({ distance_mm: positive() });
 
-export const designSchemaV1 = z.strictObject({
+export const designSchema = z.strictObject({
 	format: z.literal(DESIGN_FORMAT),
 	version: z.literal(DESIGN_VERSION),
 	name: label(),
@@ -117,7 +118,9 @@ export const designSchemaV1 = z.strictObject({
 	groups: z.array(groupSchema).default([]),
 	drive: driveSchema,
 	thresholds: thresholdSchema,
-	viewing: viewingSchema
+	viewing: viewingSchema,
+	cell: cellSchema,
+	lighting: lightingSchema
 });
 
 export type Point = z.infer<typeof pointSchema>;
@@ -130,4 +133,4 @@ export type Group = z.infer<typeof groupSchema>;
 export type DriveSettings = z.infer<typeof driveSchema>;
 export type Inversion = z.infer<typeof inversionSchema>;
 export type Thresholds = z.infer<typeof thresholdSchema>;
-export type Design = z.infer<typeof designSchemaV1>;
+export type Design = z.infer<typeof designSchema>;

@@ -1,0 +1,99 @@
+/**
+ * The cell and light sections of the design document (added in version 2): the fluid, the stack
+ * of polarizers and reflector, and the ambient light the readout is judged under.
+ *
+ * Units: gap in µm, angles in degrees, times in seconds, illuminance in lux. Reflectances and
+ * transmittances are fractions 0…1.
+ */
+import { z } from 'zod';
+
+const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
+const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
+const fraction = () => finite().refine((v) => v >= 0 && v <= 1, 'expected a fraction from 0 to 1');
+
+const cauchySchema = z.strictObject({ a: positive(), b_um2: finite(), c_um4: finite() });
+
+/** A user-defined nematic fluid; every field as in the material model (lc/material.ts). */
+export const customMaterialSchema = z
+	.strictObject({
+		id: z.string().min(1),
+		label: z.string().max(200),
+		source: z.string().max(2000),
+		reference_C: finite(),
+		clearing_C: finite(),
+		orderExponent: positive(),
+		extraordinary: cauchySchema,
+		ordinary: cauchySchema,
+		k11_pN: positive(),
+		k22_pN: positive(),
+		k33_pN: positive(),
+		epsParallel: positive(),
+		epsPerpendicular: positive(),
+		gamma1_Pas: positive(),
+		activation_eV: finite().refine((v) => v >= 0, 'expected 0 eV or more'),
+		viscosityLaw: z.enum(['order-arrhenius', 'arrhenius'])
+	})
+	.refine((m) => m.clearing_C > m.reference_C, 'expected clearing_C above reference_C')
+	.refine((m) => m.epsParallel > m.epsPerpendicular, 'a TN fluid needs epsParallel above epsPerpendicular');
+
+export const materialChoiceSchema = z.union([
+	z.strictObject({ preset: z.string().min(1) }),
+	z.strictObject({ custom: customMaterialSchema })
+]);
+
+export const polarizerChoiceSchema = z.discriminatedUnion('kind', [
+	/** The tool's neutral-grey iodine-PVA-like model (typical values). */
+	z.strictObject({ kind: z.literal('neutral-grey') }),
+	z.strictObject({ kind: z.literal('ideal') }),
+	/** Constant principal intensity transmittances: pass k1, block k2. */
+	z.strictObject({ kind: z.literal('custom'), k1: fraction(), k2: fraction() })
+]);
+
+export const reflectorChoiceSchema = z.strictObject({
+	kind: z.enum(['diffuse-white', 'brushed-metal', 'transflective']),
+	reflectance: fraction().optional(),
+	depolarizedFraction: fraction().optional(),
+	transmittance: fraction().optional()
+});
+
+export const cellSchema = z.strictObject({
+	material: materialChoiceSchema,
+	gap_um: positive(),
+	twist_deg: finite().refine((v) => v >= 0 && v <= 270, 'expected a twist from 0 to 270°'),
+	pretilt_deg: finite().refine((v) => v >= 0 && v < 45, 'expected a pretilt from 0 to 45°'),
+	/** Gap-to-pitch ratio d/p of the chiral dopant. */
+	gapToPitch: finite().refine((v) => Math.abs(v) <= 2, 'expected |d/p| of at most 2'),
+	/** Positive: dark segments on a light ground; negative: light segments on a dark ground. */
+	mode: z.enum(['positive', 'negative']),
+	polarizer: polarizerChoiceSchema,
+	reflector: reflectorChoiceSchema,
+	frontSurfaceReflectance: fraction(),
+	/** Switching slower than this (e.g. when cold) is flagged. */
+	switchingLimit_s: positive()
+});
+
+export const lightingSchema = z.strictObject({
+	/** 'A', 'D50', 'D65', 'D<cct>' such as 'D75', 'F2', 'F11' or 'E'. */
+	illuminant: z.string().min(1),
+	observer: z.union([z.literal(2), z.literal(10)]),
+	illuminance_lx: positive()
+});
+
+export type CellSettings = z.infer<typeof cellSchema>;
+export type Lighting = z.infer<typeof lightingSchema>;
+export type CustomMaterial = z.infer<typeof customMaterialSchema>;
+
+export const DEFAULT_CELL: CellSettings = {
+	material: { preset: 'generic-reflective-tn' },
+	gap_um: 5,
+	twist_deg: 90,
+	pretilt_deg: 2,
+	gapToPitch: 0.1,
+	mode: 'positive',
+	polarizer: { kind: 'neutral-grey' },
+	reflector: { kind: 'brushed-metal' },
+	frontSurfaceReflectance: 0.04,
+	switchingLimit_s: 1
+};
+
+export const DEFAULT_LIGHTING: Lighting = { illuminant: 'D65', observer: 2, illuminance_lx: 500 };
