@@ -1,0 +1,245 @@
+/*
+ * Import the CIE colorimetric tables from Debian's colord-data into checked-in TypeScript.
+ *
+ *   npx tsx scripts/import-cie-tables.ts            # reads /usr/share/colord
+ *   COLORD_DATA_DIR=/some/colord npx tsx scripts/import-cie-tables.ts
+ *
+ * colord ships the tables as CGATS/IT8-style text: a header of `KEYWORD value` lines
+ * (SPECTRAL_START_NM, SPECTRAL_END_NM, SPECTRAL_BANDS, NUMBER_OF_SETS), an optional
+ * BEGIN_DATA_FORMAT … END_DATA_FORMAT block naming the SPEC_<nm> fields, and
+ * BEGIN_DATA … END_DATA with one whitespace-separated row per function.
+ * Numbers are written so that they parse back to exactly the same doubles (the data-identity
+ * test in tests/color compares them with ===).
+ * Output: src/lib/core/color/data/*.ts (one module per table family).
+ */
+import { execFileSync } from 'node:child_process';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { dirname, join, relative } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const COLORD_DIR = process.env.COLORD_DATA_DIR ?? '/usr/share/colord';
+const REPO_ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
+const OUT_DIR = join(REPO_ROOT, 'src/lib/core/color/data');
+const SCRIPT = relative(REPO_ROOT, fileURLToPath(import.meta.url));
+const NUMBERS_PER_LINE = 8;
+
+interface ParsedSpectralFile {
+	start_nm: number;
+	step_nm: number;
+	rows: number[][];
+}
+
+function headerNumber(text: string, keyword: string, file: string): number {
+	const match = new RegExp(`^\\s*${keyword}\\s+"?([-+0-9.eE]+)"?\\s*$`, 'm').exec(text);
+	if (!match) throw new Error(`${file}: header keyword ${keyword} missing`);
+	return Number(match[1]);
+}
+
+function block(text: string, begin: string, end: string, file: string): string {
+	const match = new RegExp(`^${begin}\\s*$([\\s\\S]*?)^${end}\\s*$`, 'm').exec(text);
+	if (!match) throw new Error(`${file}: no ${begin} … ${end} block`);
+	return match[1];
+}
+
+/** Parse one colord spectral file and check it against its own header. */
+function parseSpectralFile(file: string): ParsedSpectralFile {
+	const text = readFileSync(join(COLORD_DIR, file), 'utf8');
+	const start_nm = headerNumber(text, 'SPECTRAL_START_NM', file);
+	const end_nm = headerNumber(text, 'SPECTRAL_END_NM', file);
+	const bands = headerNumber(text, 'SPECTRAL_BANDS', file);
+	const sets = headerNumber(text, 'NUMBER_OF_SETS', file);
+	const step_nm = (end_nm - start_nm) / (bands - 1);
+	if (
+		!Number.isInteger(bands) ||
+		bands < 2 ||
+		!(step_nm > 0) ||
+		step_nm !== Math.round(step_nm * 1e6) / 1e6
+	)
+		throw new Error(`${file}: implausible grid ${start_nm}–${end_nm} nm in ${bands} bands`);
+
+	const fields = block(text, 'BEGIN_DATA_FORMAT', 'END_DATA_FORMAT', file)
+		.split(/\s+/)
+		.filter(Boolean);
+	fields.forEach((field, i) => {
+		// Most files name fields SPEC_<nm>; colord's CIE-A.sp writes them in thousandths (SPEC_300000).
+		const named = Number(/^SPEC_(\d+)$/.exec(field)?.[1]);
+		const wavelength_nm = start_nm + i * step_nm;
+		if (named !== wavelength_nm && named !== wavelength_nm * 1000)
+			throw new Error(`${file}: field ${i} is ${field}, expected SPEC_${wavelength_nm}`);
+	});
+	if (fields.length !== 0 && fields.length !== bands)
+		throw new Error(`${file}: ${fields.length} fields named, ${bands} bands declared`);
+
+	const rows = block(text, 'BEGIN_DATA', 'END_DATA', file)
+		.split('\n')
+		.map((line) => line.trim())
+		.filter(Boolean)
+		.map((line) => line.split(/\s+/).map(Number));
+	if (rows.length !== sets) throw new Error(`${file}: ${rows.length} rows, ${sets} sets declared`);
+	for (const row of rows) {
+		if (row.length !== bands)
+			throw new Error(`${file}: a row has ${row.length} of ${bands} values`);
+		if (row.some((v) => !Number.isFinite(v))) throw new Error(`${file}: non-numeric value`);
+	}
+	return { start_nm, step_nm, rows };
+}
+
+function colordPackage(): string {
+	try {
+		const version = execFileSync('dpkg-query', ['-W', '-f=${Version}', 'colord-data'], {
+			encoding: 'utf8'
+		});
+		return `Debian colord-data ${version.trim()}`;
+	} catch {
+		return 'Debian colord-data (version unknown)';
+	}
+}
+
+const PACKAGE = colordPackage();
+
+function numberList(values: readonly number[], indent: string): string {
+	const lines: string[] = [];
+	for (let i = 0; i < values.length; i += NUMBERS_PER_LINE)
+		lines.push(
+			indent +
+				values
+					.slice(i, i + NUMBERS_PER_LINE)
+					.map(String)
+					.join(', ')
+		);
+	return `[\n${lines.join(',\n')}\n${indent.slice(1)}]`;
+}
+
+function sourceLiteral(file: string): string {
+	return `{ file: '${file}', package: '${PACKAGE}' }`;
+}
+
+interface ModuleSpec {
+	/** Path below the colord directory. */
+	file: string;
+	/** Name of the exported constant. */
+	name: string;
+	/** Header lines naming the original publication. */
+	publication: string[];
+}
+
+function header(spec: { files: string[]; publication: string[]; typeName: string }): string {
+	const { files, publication, typeName } = spec;
+	return [
+		'/*',
+		` * GENERATED by ${SCRIPT} — do not edit; rerun the script instead.`,
+		` * Read from ${PACKAGE}:`,
+		...files.map((file) => ` *   ${join(COLORD_DIR, file)}`),
+		...publication.map((line) => ` * ${line}`),
+		' * Values are copied exactly as colord distributes them (see data/README.md).',
+		' */',
+		`import type { ${typeName} } from './table-types';`,
+		''
+	].join('\n');
+}
+
+function colorMatchingModule({ file, name, publication }: ModuleSpec): string {
+	const { start_nm, step_nm, rows } = parseSpectralFile(file);
+	if (rows.length !== 3) throw new Error(`${file}: expected x̄, ȳ, z̄ rows`);
+	return `${header({ files: [file], publication, typeName: 'ColorMatchingTable' })}
+export const ${name}: ColorMatchingTable = {
+	source: ${sourceLiteral(file)},
+	start_nm: ${start_nm},
+	step_nm: ${step_nm},
+	xBar: ${numberList(rows[0], '\t\t')},
+	yBar: ${numberList(rows[1], '\t\t')},
+	zBar: ${numberList(rows[2], '\t\t')}
+};
+`;
+}
+
+function daylightBasisModule({ file, name, publication }: ModuleSpec): string {
+	const { start_nm, step_nm, rows } = parseSpectralFile(file);
+	if (rows.length !== 3) throw new Error(`${file}: expected S0, S1, S2 rows`);
+	return `${header({ files: [file], publication, typeName: 'DaylightBasisTable' })}
+export const ${name}: DaylightBasisTable = {
+	source: ${sourceLiteral(file)},
+	start_nm: ${start_nm},
+	step_nm: ${step_nm},
+	s0: ${numberList(rows[0], '\t\t')},
+	s1: ${numberList(rows[1], '\t\t')},
+	s2: ${numberList(rows[2], '\t\t')}
+};
+`;
+}
+
+/** colord's illuminant .sp files hold the CIE relative power divided by 100. */
+const COLORD_ILLUMINANT_TO_PUBLISHED = 100;
+
+function illuminantModule(tables: [string, string][], publication: string[]): string {
+	const body = tables.map(([file, name]) => {
+		const { start_nm, step_nm, rows } = parseSpectralFile(file);
+		if (rows.length !== 1) throw new Error(`${file}: expected one spectral row`);
+		return `export const ${name}: SpectralTable = {
+	source: ${sourceLiteral(file)},
+	start_nm: ${start_nm},
+	step_nm: ${step_nm},
+	toPublishedUnits: ${COLORD_ILLUMINANT_TO_PUBLISHED},
+	values: ${numberList(rows[0], '\t\t')}
+};
+`;
+	});
+	const files = tables.map(([file]) => file);
+	return `${header({ files, publication, typeName: 'SpectralTable' })}\n${body.join('\n')}`;
+}
+
+const outputs: Record<string, string> = {
+	'cie1931-2deg.ts': colorMatchingModule({
+		file: 'cmf/CIE1931-2deg-XYZ.cmf',
+		name: 'CIE1931_2DEG_CMF',
+		publication: [
+			'CIE 1931 standard colorimetric observer (2°), 5 nm, 360–830 nm:',
+			'CIE 15:2004 Colorimetry, 3rd ed.; CIE S 014-1:2006 (ISO/CIE 11664-1).'
+		]
+	}),
+	'cie1964-10deg.ts': colorMatchingModule({
+		file: 'cmf/CIE1964-10deg-XYZ.cmf',
+		name: 'CIE1964_10DEG_CMF',
+		publication: [
+			'CIE 1964 supplementary standard colorimetric observer (10°), 5 nm, 360–830 nm:',
+			'CIE 15:2004 Colorimetry, 3rd ed.; CIE S 014-1:2006 (ISO/CIE 11664-1).'
+		]
+	}),
+	'daylight-basis.ts': daylightBasisModule({
+		file: 'ref/CIE-1986-daylight-SPD.cmf',
+		name: 'DAYLIGHT_BASIS',
+		publication: [
+			'CIE daylight components S0, S1, S2 (Judd, MacAdam & Wyszecki 1964), 5 nm, 300–830 nm:',
+			'CIE 15.2:1986 / CIE 15:2004 Colorimetry, daylight basis table.'
+		]
+	}),
+	'fluorescent-f2-f11.ts': illuminantModule(
+		[
+			['illuminant/CIE-F2.sp', 'CIE_F2'],
+			['illuminant/CIE-F11.sp', 'CIE_F11']
+		],
+		[
+			'CIE fluorescent illuminants F2 (cool white) and F11 (narrow-band, 4000 K),',
+			'relative spectral power, 5 nm, 380–780 nm: CIE 15:2004 Colorimetry, 3rd ed.'
+		]
+	),
+	'standard-illuminant-tables.ts': illuminantModule(
+		[
+			['illuminant/CIE-A.sp', 'CIE_A_TABLE'],
+			['illuminant/CIE-D50.sp', 'CIE_D50_TABLE'],
+			['illuminant/CIE-D65.sp', 'CIE_D65_TABLE'],
+			['illuminant/CIE-E.sp', 'CIE_E_TABLE']
+		],
+		[
+			'CIE illuminants A (1 nm, 300–830 nm) and D65 (5 nm, 300–830 nm): CIE S 014-2:2006',
+			'(ISO/CIE 11664-2); D50 (5 nm, 380–780 nm): CIE 15:2004; equal-energy E (5 nm, 380–830 nm).',
+			'The app computes A and the D series from their definitions; these tables are the',
+			'published values those computations are checked against, and E is used directly.'
+		]
+	)
+};
+
+for (const [name, text] of Object.entries(outputs)) {
+	writeFileSync(join(OUT_DIR, name), text);
+	console.log(`wrote ${relative(REPO_ROOT, join(OUT_DIR, name))} (${text.length} characters)`);
+}

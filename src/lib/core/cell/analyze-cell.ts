@@ -1,0 +1,127 @@
+/**
+ * The optical report of a design's cell: electro-optic curves and switching voltages at the cold,
+ * room and hot ends of the operating range; the look of background, off and on pixels under the
+ * design's drive and light; contrast and colour difference; response times against temperature.
+ */
+import type { Design } from '../design/schema';
+import { deltaE2000 } from '../color/delta-e-2000';
+import { responseVsTemperature } from '../lc/response';
+import { materialAt } from '../lc/temperature';
+import { rmsVoltages } from '../drive/rms-drive';
+import type { ThresholdPoint } from '../drive/threshold-at-temperature';
+import type { Finding } from '../drive/drive-verdict';
+import { createCellOptics } from './cell-optics';
+import { electroOpticCurve, type ElectroOpticCurve } from './electro-optic-curve';
+import { contrastRatio, pixelAppearance, type PixelAppearance } from './pixel-appearance';
+import { geometryOfCell, materialOfCell } from './resolve-cell';
+
+export const ROOM_C = 25;
+
+export interface CellReport {
+	temperatures_C: number[];
+	curves: ElectroOpticCurve[];
+	/** Switching voltages read from the curves, for the drive check. */
+	thresholds: ThresholdPoint[];
+	/** At room temperature (or the nearest end of the range) with the design's drive. */
+	room_C: number;
+	background: PixelAppearance;
+	off: PixelAppearance;
+	on: PixelAppearance;
+	/** Off (unselected) segment against on segment, first-surface reflection included. */
+	contrastRatio: number;
+	/** Background against on segment. */
+	backgroundContrastRatio: number;
+	deltaE00: number;
+	/** Visible difference between off segments and the background: ghosting. */
+	ghostDeltaE00: number;
+	response: ReturnType<typeof responseVsTemperature>;
+	findings: Finding[];
+}
+
+function checkedTemperatures(min_C: number, max_C: number): number[] {
+	const room = Math.min(Math.max(ROOM_C, min_C), max_C);
+	return [...new Set([min_C, room, max_C])].sort((a, b) => a - b);
+}
+
+export function analyzeCell(
+	design: Design,
+	onProgress?: (done: number, total: number) => void
+): CellReport {
+	const { cell, lighting, drive } = design;
+	const material = materialOfCell(cell);
+	const findings: Finding[] = [];
+	const hot = materialAt({ material, temperature_C: drive.temperature.max_C });
+	if (hot.phase !== 'nematic') {
+		throw new Error(
+			`the fluid clears at ${material.clearing_C} °C, below the hottest operating temperature ` +
+				`${drive.temperature.max_C} °C: the display would blank. Choose a fluid with a higher clearing point.`
+		);
+	}
+	const temperatures_C = checkedTemperatures(drive.temperature.min_C, drive.temperature.max_C);
+	const room_C = temperatures_C.includes(ROOM_C)
+		? ROOM_C
+		: temperatures_C[Math.floor(temperatures_C.length / 2)];
+	const rms = rmsVoltages({
+		commons: drive.commons,
+		biasDivisor: drive.biasDivisor,
+		amplitude_V: drive.amplitude_V
+	});
+	const curves: ElectroOpticCurve[] = [];
+	let background, off, on;
+	for (const [index, temperature_C] of temperatures_C.entries()) {
+		const optics = createCellOptics({ cell, lighting, temperature_C });
+		curves.push(electroOpticCurve({ optics }));
+		if (temperature_C === room_C) {
+			const zero = optics.stateAt(0);
+			background = pixelAppearance(zero, lighting.illuminance_lx);
+			const offState = rms.off_V > 0 ? optics.stateAt(rms.off_V, zero.solution) : zero;
+			off = pixelAppearance(offState, lighting.illuminance_lx);
+			on = pixelAppearance(optics.stateAt(rms.on_V, offState.solution), lighting.illuminance_lx);
+		}
+		onProgress?.(index + 1, temperatures_C.length);
+	}
+	if (!background || !off || !on) throw new Error('no room-temperature state was computed');
+	const response = responseVsTemperature({
+		material,
+		geometry: geometryOfCell(cell),
+		voltage_V: rms.on_V,
+		temperatures_C: responseTemperatures(drive.temperature.min_C, drive.temperature.max_C),
+		limit_s: cell.switchingLimit_s
+	});
+	if (response.tooSlowAt_C.length > 0) {
+		const coldest = Math.min(...response.tooSlowAt_C);
+		findings.push({
+			severity: 'warn',
+			message:
+				`Switching is slower than ${cell.switchingLimit_s} s at and below ${Math.max(...response.tooSlowAt_C)} °C ` +
+				`(coldest checked ${coldest} °C): readings will lag or smear. Consider a lower-viscosity fluid, a thinner gap or a heater.`
+		});
+	}
+	const ghostDeltaE00 = deltaE2000(background, off);
+	return {
+		temperatures_C,
+		curves,
+		thresholds: curves.map((c) => ({
+			temperature_C: c.temperature_C,
+			v10_V: c.v10_V,
+			v90_V: c.v90_V
+		})),
+		room_C,
+		background,
+		off,
+		on,
+		contrastRatio: contrastRatio(off, on),
+		backgroundContrastRatio: contrastRatio(background, on),
+		deltaE00: deltaE2000(off, on),
+		ghostDeltaE00,
+		response,
+		findings
+	};
+}
+
+function responseTemperatures(min_C: number, max_C: number): number[] {
+	const list = [min_C];
+	for (let t = Math.ceil(min_C / 10) * 10; t < max_C; t += 10) if (t > min_C) list.push(t);
+	if (max_C > min_C) list.push(max_C);
+	return list;
+}

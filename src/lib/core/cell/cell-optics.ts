@@ -1,0 +1,98 @@
+/**
+ * One cell at one temperature, ready to answer "what does a pixel look like at V volts RMS?":
+ * the director profile (constant-voltage statics, lc/director.ts) feeds the reflective Jones
+ * stack (optics/) on the visible grid, and the reflectance spectrum is turned into colour under
+ * the design's illuminant (color/).
+ *
+ * The evaluator, indices and tristimulus weights are built once per temperature; a state then
+ * costs one director solve (warm-started from a neighbouring voltage) and one spectral pass.
+ */
+import type { CellSettings, Lighting } from '../design/cell-schema';
+import { cellAt, type DirectorCell } from '../lc/cell';
+import { solveDirector } from '../lc/director';
+import type { DirectorProfile, DirectorSolution } from '../lc/profile';
+import { indicesAt } from '../lc/temperature';
+import { twistedThreshold_V, splayThreshold_V } from '../lc/threshold';
+import {
+	createStackEvaluator,
+	createStackSpectra,
+	type StackSpectra
+} from '../optics/stack-evaluator';
+import { reflectanceToColor, type ReflectanceColor } from '../color/reflectance-to-color';
+import { VISIBLE_5NM_GRID, gridWavelengths_nm } from '../color/spectrum';
+import type { ObserverName } from '../color/observers';
+import { illuminantByName } from '../color/illuminant-by-name';
+import { geometryOfCell, materialOfCell, stackOfCell } from './resolve-cell';
+
+export const CELL_GRID = VISIBLE_5NM_GRID;
+/** Director nodes across the gap: 60 slabs keep the spectra within ~1e-4 of a fine solve. */
+export const CELL_SLICES = 60;
+
+export interface PixelState {
+	voltage_V: number;
+	solution: DirectorSolution;
+	reflectance: Float64Array;
+	color: ReflectanceColor;
+}
+
+export interface CellOptics {
+	temperature_C: number;
+	directorCell: DirectorCell;
+	/** Analytic threshold of the twisted cell (Schadt–Helfrich form), V. */
+	analyticThreshold_V: number;
+	wavelengths_nm: Float64Array;
+	stateAt(voltage_V: number, start?: DirectorProfile): PixelState;
+	/** Spectra of a given profile, for callers that already have one. */
+	spectraOf(profile: DirectorProfile): StackSpectra;
+}
+
+export function observerName(observer: 2 | 10): ObserverName {
+	return observer === 10 ? 'CIE1964-10deg' : 'CIE1931-2deg';
+}
+
+export function createCellOptics(options: {
+	cell: CellSettings;
+	lighting: Lighting;
+	temperature_C: number;
+}): CellOptics {
+	const { cell, lighting, temperature_C } = options;
+	const material = materialOfCell(cell);
+	const directorCell = cellAt({ geometry: geometryOfCell(cell), material, temperature_C });
+	const wavelengths_nm = gridWavelengths_nm(CELL_GRID);
+	const ne = new Float64Array(wavelengths_nm.length);
+	const no = new Float64Array(wavelengths_nm.length);
+	wavelengths_nm.forEach((wavelength_nm, i) => {
+		const pair = indicesAt({ material, temperature_C, wavelength_nm });
+		ne[i] = pair.ne;
+		no[i] = pair.no;
+	});
+	const evaluator = createStackEvaluator({
+		wavelengths_nm,
+		indicesAt: { ne, no },
+		stack: stackOfCell(cell)
+	});
+	const illuminant = illuminantByName(lighting.illuminant);
+	const observer = observerName(lighting.observer);
+	const twisted = twistedThreshold_V(directorCell);
+	const analyticThreshold_V = twisted > 0 ? twisted : splayThreshold_V(directorCell.material);
+	const spectraOf = (profile: DirectorProfile) =>
+		evaluator.evaluate(profile, createStackSpectra(wavelengths_nm.length));
+	return {
+		temperature_C,
+		directorCell,
+		analyticThreshold_V,
+		wavelengths_nm,
+		spectraOf,
+		stateAt(voltage_V, start) {
+			const solution = solveDirector({ cell: directorCell, voltage_V, start, slices: CELL_SLICES });
+			if (!solution.convergence.converged) {
+				throw new Error(
+					`the director solution did not converge at ${voltage_V.toFixed(3)} V, ${temperature_C} °C`
+				);
+			}
+			const { reflectance } = spectraOf(solution);
+			const color = reflectanceToColor({ reflectance, grid: CELL_GRID, illuminant, observer });
+			return { voltage_V, solution, reflectance, color };
+		}
+	};
+}
