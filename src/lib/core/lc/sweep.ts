@@ -1,0 +1,49 @@
+/**
+ * Director profiles over a list of RMS voltages with continuation.
+ *
+ * The first voltage is reached from 0 V through the threshold-scaled ladder of director.ts (or
+ * from `start` when given); every later voltage is warm-started from the previous solution, in the
+ * order given. Order therefore matters only for hysteretic (high-twist) cells: sweep upwards for
+ * the switching branch, downwards for the relaxing one. One workspace serves the whole sweep.
+ */
+import type { DirectorCell } from './cell';
+import { createDirectorWorkspace } from './directorKernel';
+import {
+	checkCell,
+	checkVoltage,
+	continuationLadder,
+	resolveSettings,
+	solveAlong,
+	type DirectorSettings
+} from './director';
+import { loadInitialGuess, loadStartProfile } from './directorSetup';
+import type { DirectorProfile, DirectorSolution } from './profile';
+
+export function sweepVoltage(
+	options: {
+		cell: DirectorCell;
+		voltages_V: readonly number[];
+		start?: DirectorProfile;
+	} & DirectorSettings
+): DirectorSolution[] {
+	const { cell, voltages_V, start } = options;
+	checkCell(cell);
+	voltages_V.forEach(checkVoltage);
+	const { slices, newton } = resolveSettings(options);
+	const ws = createDirectorWorkspace(slices);
+	const solutions: DirectorSolution[] = [];
+	voltages_V.forEach((voltage_V, index) => {
+		if (index > 0) {
+			solutions.push(solveAlong({ ws, cell, voltages_V: [voltage_V], newton }));
+		} else if (start) {
+			loadStartProfile(ws, cell, start);
+			solutions.push(solveAlong({ ws, cell, voltages_V: [voltage_V], newton }));
+		} else {
+			loadInitialGuess(ws, cell, newton.nudge_rad);
+			solutions.push(
+				solveAlong({ ws, cell, voltages_V: continuationLadder(cell, voltage_V), newton })
+			);
+		}
+	});
+	return solutions;
+}
