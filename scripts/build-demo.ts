@@ -245,12 +245,18 @@ const design: Design = {
 	drive: {
 		commons: 4,
 		biasDivisor: 3,
-		amplitude_V: 3.3,
+		amplitude_V: 4.7,
 		frameRate_Hz: 64,
 		inversion: 'line',
-		temperature: { min_C: -10, max_C: 60 }
+		temperature: { min_C: 0, max_C: 40 }
 	},
-	thresholds: { source: 'manual', v10_V: 1.3, v90_V: 1.7, reference_C: 25, tempCoeff_mV_per_K: -3 },
+	thresholds: {
+		source: 'computed',
+		v10_V: 1.79,
+		v90_V: 2.38,
+		reference_C: 25,
+		tempCoeff_mV_per_K: -5.5
+	},
 	viewing: { distance_mm: 600 },
 	cell: DEFAULT_CELL,
 	lighting: { illuminant: 'D65', observer: 2, illuminance_lx: 500 }

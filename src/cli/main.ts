@@ -8,6 +8,8 @@ import type { CliIo } from './io';
 import { runDrive } from './commands/drive';
 import { runCheck } from './commands/check';
 import { runDemo } from './commands/demo';
+import { runCell } from './commands/cell';
+import { runIlluminant } from './commands/illuminant';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -16,13 +18,21 @@ Usage: sunglyph <command> [options]
 
 Commands:
   drive        RMS levels, selection ratio and Alt–Pleshko limit of a multiplexed drive
-  check FILE   validate a design and check its wiring and drive
+  cell         evaluate a reflective TN cell: transmission, V10/V50/V90, colours
+  illuminant   X, Y, Z and x, y of a CIE illuminant's white
+  check FILE   validate a design; check its wiring, drive and optics
   demo         write the demo design to stdout
 
 Run "sunglyph <command> --help" for a command's options.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
-const COMMANDS: Record<string, Command> = { drive: runDrive, check: runCheck, demo: runDemo };
+const COMMANDS: Record<string, Command> = {
+	drive: runDrive,
+	cell: runCell,
+	illuminant: runIlluminant,
+	check: runCheck,
+	demo: runDemo
+};
 
 const processIo: CliIo = {
 	out: (text) => process.stdout.write(text),

@@ -2,7 +2,8 @@
 import { parseArgs } from 'node:util';
 import { parseDesignText } from '../../lib/core/design/parse-design';
 import { formatIssue } from '../../lib/core/design/issues';
-import { analyzeDesign } from '../../lib/core/analyze-design';
+import { analyzeDesignWithCell } from '../../lib/core/analyze-design';
+import { opticsSummary, opticsLines } from '../optics-report';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
@@ -47,9 +48,9 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 		);
 		return EXIT.badInput;
 	}
-	const report = analyzeDesign(parsed.design);
+	const report = analyzeDesignWithCell(parsed.design);
 	if (values.json) {
-		io.out(JSON.stringify(report, null, 2) + '\n');
+		io.out(JSON.stringify({ ...report, optics: opticsSummary(report) }, null, 2) + '\n');
 	} else {
 		const lines = [`${parsed.design.name}`, '', 'Wiring'];
 		for (const f of report.wiring.findings)
@@ -61,6 +62,8 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 				.split('\n')
 				.map((l) => (l ? `  ${l}` : l))
 		);
+		lines.push('', 'Optics');
+		lines.push(...opticsLines(report).map((l) => (l ? `  ${l}` : l)));
 		lines.push(
 			'',
 			`Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`

@@ -1,20 +1,49 @@
 /**
  * Design in, full report out: the one entry the web app, the command line and the tests share.
+ *
+ * The drive check is instant; the cell's optics take a few hundred milliseconds, so callers may
+ * pass a cell report computed elsewhere (the app does it in a worker). When the design takes its
+ * switching voltages from the cell model, the drive check uses the cell report's V10/V90 at the
+ * cold, room and hot temperatures instead of the entered values.
  */
 import type { Design } from './design/schema';
-import { analyzeDrive, analyzeWiring, type DriveReport, type WiringReport } from './drive/analyze-drive';
-import { overallSeverity, type Severity } from './drive/drive-verdict';
+import {
+	analyzeDrive,
+	analyzeWiring,
+	type DriveReport,
+	type WiringReport
+} from './drive/analyze-drive';
+import { overallSeverity, type Finding, type Severity } from './drive/drive-verdict';
+import { analyzeCell, type CellReport } from './cell/analyze-cell';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
 	wiring: WiringReport;
 	drive: DriveReport;
+	/** Null when the cell was not evaluated (yet) or could not be. */
+	cell: CellReport | null;
+	cellError: string | null;
+	/** Where the drive check's V10/V90 came from. */
+	thresholdSource: 'entered' | 'cell model';
 	severity: Severity;
 }
 
-export function analyzeDesign(design: Design): DesignReport {
+export function analyzeDesign(
+	design: Design,
+	options: { cell?: CellReport | null; cellError?: string | null } = {}
+): DesignReport {
+	const cell = options.cell ?? null;
+	const cellError = options.cellError ?? null;
 	const wiring = analyzeWiring(design);
-	const drive = analyzeDrive({ drive: design.drive, thresholds: design.thresholds });
+	const useModel = design.thresholds.source === 'computed' && cell !== null;
+	const drive = analyzeDrive({
+		drive: design.drive,
+		thresholds: useModel ? cell.thresholds : design.thresholds
+	});
+	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
+	if (cell && design.thresholds.source === 'manual')
+		cellFindings.push(...thresholdAgreement(design, cell));
+	if (cellError) cellFindings.push({ severity: 'fail', message: cellError });
 	return {
 		design: {
 			name: design.name,
@@ -24,6 +53,43 @@ export function analyzeDesign(design: Design): DesignReport {
 		},
 		wiring,
 		drive,
-		severity: overallSeverity([...wiring.findings, ...drive.findings])
+		cell,
+		cellError,
+		thresholdSource: useModel ? 'cell model' : 'entered',
+		severity: overallSeverity([...wiring.findings, ...drive.findings, ...cellFindings])
 	};
+}
+
+/** Evaluates the cell too, turning a model failure into a finding rather than a crash. */
+export function analyzeDesignWithCell(design: Design): DesignReport {
+	try {
+		return analyzeDesign(design, { cell: analyzeCell(design) });
+	} catch (error) {
+		return analyzeDesign(design, {
+			cellError: error instanceof Error ? error.message : String(error)
+		});
+	}
+}
+
+/** Entered V10/V90 that disagree with the cell model by more than this fraction are flagged. */
+export const THRESHOLD_AGREEMENT = 0.1;
+
+function thresholdAgreement(design: Design, cell: CellReport): Finding[] {
+	const room = cell.curves.find((c) => c.temperature_C === cell.room_C);
+	if (!room) return [];
+	const t = design.thresholds;
+	const shift_V = (t.tempCoeff_mV_per_K / 1000) * (cell.room_C - t.reference_C);
+	const entered = { v10: t.v10_V + shift_V, v90: t.v90_V + shift_V };
+	const off10 = Math.abs(entered.v10 / room.v10_V - 1);
+	const off90 = Math.abs(entered.v90 / room.v90_V - 1);
+	if (off10 <= THRESHOLD_AGREEMENT && off90 <= THRESHOLD_AGREEMENT) return [];
+	return [
+		{
+			severity: 'warn',
+			message:
+				`The entered V10/V90 (${entered.v10.toFixed(2)}/${entered.v90.toFixed(2)} V at ${cell.room_C} °C) differ from ` +
+				`the cell model's ${room.v10_V.toFixed(2)}/${room.v90_V.toFixed(2)} V. Use measured fluid data, or switch the ` +
+				`drive check to the model's values.`
+		}
+	];
 }

@@ -85,7 +85,12 @@ export function analyzeCell(
 		material,
 		geometry: geometryOfCell(cell),
 		voltage_V: rms.on_V,
-		temperatures_C: responseTemperatures(drive.temperature.min_C, drive.temperature.max_C),
+		temperatures_C: [
+			...new Set([
+				...responseTemperatures(drive.temperature.min_C, drive.temperature.max_C),
+				room_C
+			])
+		].sort((a, b) => a - b),
 		limit_s: cell.switchingLimit_s
 	});
 	if (response.tooSlowAt_C.length > 0) {
@@ -98,6 +103,7 @@ export function analyzeCell(
 		});
 	}
 	const ghostDeltaE00 = deltaE2000(background, off);
+	findings.push(...contrastFindings(contrastRatio(off, on), ghostDeltaE00));
 	return {
 		temperatures_C,
 		curves,
@@ -117,6 +123,38 @@ export function analyzeCell(
 		response,
 		findings
 	};
+}
+
+/**
+ * Contrast limits: below 3:1 a readout fails ISO 9241-3's minimum; 6:1 and more is what
+ * display ergonomics guidance recommends (ISO 9241-3; NUREG-0700 Rev. 3, ambient reflections
+ * included). A ghost (off segment against background) above ΔE00 ≈ 1 starts to be visible side
+ * by side [common practice: a just-noticeable difference of about 1 ΔE00].
+ */
+export const CONTRAST_MINIMUM = 3;
+export const CONTRAST_RECOMMENDED = 6;
+export const GHOST_VISIBLE_DELTA_E00 = 1;
+
+function contrastFindings(ratio: number, ghost: number): Finding[] {
+	const findings: Finding[] = [];
+	if (ratio < CONTRAST_MINIMUM) {
+		findings.push({
+			severity: 'fail',
+			message: `On segments reach only ${ratio.toFixed(2)}:1 against off segments (minimum ${CONTRAST_MINIMUM}:1): raise the drive or check the cell's switching voltages.`
+		});
+	} else if (ratio < CONTRAST_RECOMMENDED) {
+		findings.push({
+			severity: 'warn',
+			message: `Contrast ${ratio.toFixed(2)}:1 is legible but below the ${CONTRAST_RECOMMENDED}:1 usually recommended; an anti-reflection front or a stronger drive helps.`
+		});
+	}
+	if (ghost > GHOST_VISIBLE_DELTA_E00) {
+		findings.push({
+			severity: 'warn',
+			message: `Off segments differ from the background by ΔE00 ${ghost.toFixed(1)}: they may show as ghosts.`
+		});
+	}
+	return findings;
 }
 
 function responseTemperatures(min_C: number, max_C: number): number[] {

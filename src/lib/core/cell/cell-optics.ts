@@ -42,6 +42,8 @@ export interface CellOptics {
 	analyticThreshold_V: number;
 	wavelengths_nm: Float64Array;
 	stateAt(voltage_V: number, start?: DirectorProfile): PixelState;
+	/** Single pass between the polarizers at each grid wavelength (ideal parallel pair = 1). */
+	singlePassOf(profile: DirectorProfile): Float64Array;
 	/** Spectra of a given profile, for callers that already have one. */
 	spectraOf(profile: DirectorProfile): StackSpectra;
 }
@@ -54,6 +56,8 @@ export function createCellOptics(options: {
 	cell: CellSettings;
 	lighting: Lighting;
 	temperature_C: number;
+	/** Fix the angle between the polarizers instead of following the display mode. */
+	polarizerAngle_deg?: number;
 }): CellOptics {
 	const { cell, lighting, temperature_C } = options;
 	const material = materialOfCell(cell);
@@ -69,7 +73,7 @@ export function createCellOptics(options: {
 	const evaluator = createStackEvaluator({
 		wavelengths_nm,
 		indicesAt: { ne, no },
-		stack: stackOfCell(cell)
+		stack: stackOfCell(cell, { polarizerAngle_deg: options.polarizerAngle_deg })
 	});
 	const illuminant = illuminantByName(lighting.illuminant);
 	const observer = observerName(lighting.observer);
@@ -83,6 +87,7 @@ export function createCellOptics(options: {
 		analyticThreshold_V,
 		wavelengths_nm,
 		spectraOf,
+		singlePassOf: (profile) => spectraOf(profile).singlePass,
 		stateAt(voltage_V, start) {
 			const solution = solveDirector({ cell: directorCell, voltage_V, start, slices: CELL_SLICES });
 			if (!solution.convergence.converged) {

@@ -44,12 +44,24 @@ function reflectorSpec(choice: CellSettings['reflector']): ReflectorSpec {
 	return { kind: 'transflective', reflectance, transmittance, depolarizedFraction };
 }
 
-export function stackOfCell(cell: CellSettings): ReflectiveStackSpec {
-	return reflectiveStackForMode({
+/**
+ * The optical stack. The display mode sets the rear polarizer relative to the twist; a caller may
+ * instead fix the angle between the polarizers (0° parallel, 90° crossed).
+ */
+export function stackOfCell(
+	cell: CellSettings,
+	options: { polarizerAngle_deg?: number } = {}
+): ReflectiveStackSpec {
+	const stack = reflectiveStackForMode({
 		mode: cell.mode,
 		twist_deg: cell.twist_deg,
 		polarizer: polarizerSpec(cell.polarizer),
 		reflector: reflectorSpec(cell.reflector),
 		frontSurfaceReflectance: cell.frontSurfaceReflectance
 	});
+	if (options.polarizerAngle_deg === undefined) return stack;
+	return {
+		...stack,
+		rear: { ...stack.rear, axis_deg: stack.front.axis_deg + options.polarizerAngle_deg }
+	};
 }

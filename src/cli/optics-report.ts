@@ -1,0 +1,95 @@
+/** The optical part of `check`: a compact JSON summary and terminal lines. */
+import type { DesignReport } from '../lib/core/analyze-design';
+import type { PixelAppearance } from '../lib/core/cell/pixel-appearance';
+import { fixed, formatTable } from './table';
+
+const colour = (s: PixelAppearance) => ({
+	voltage_V: s.voltage_V,
+	Y: s.Y,
+	x: s.x,
+	y: s.y,
+	L: s.L,
+	a: s.a,
+	b: s.b,
+	srgbHex: s.srgbHex,
+	luminance_cdm2: s.luminance_cdm2
+});
+
+export function opticsSummary(report: DesignReport) {
+	const cell = report.cell;
+	if (!cell) return { error: report.cellError };
+	const room = cell.curves.find((c) => c.temperature_C === cell.room_C)!;
+	return {
+		temperature_C: cell.room_C,
+		background: colour(cell.background),
+		off: colour(cell.off),
+		on: colour(cell.on),
+		contrastRatio: cell.contrastRatio,
+		backgroundContrastRatio: cell.backgroundContrastRatio,
+		deltaE00: cell.deltaE00,
+		ghostDeltaE00: cell.ghostDeltaE00,
+		v10_V: room.v10_V,
+		v50_V: room.v50_V,
+		v90_V: room.v90_V,
+		switching: cell.curves.map((c) => ({
+			temperature_C: c.temperature_C,
+			v10_V: c.v10_V,
+			v50_V: c.v50_V,
+			v90_V: c.v90_V
+		})),
+		response: cell.response.rows.map((r) => ({
+			temperature_C: r.temperature_C,
+			tauOn_s: r.times?.tauOn_s ?? null,
+			tauOff_s: r.times?.tauOff_s ?? null,
+			tooSlow: r.tooSlow
+		}))
+	};
+}
+
+export function opticsLines(report: DesignReport): string[] {
+	const cell = report.cell;
+	if (!cell) return [`FAIL  ${report.cellError ?? 'the cell was not evaluated'}`];
+	const row = (label: string, s: PixelAppearance) => [
+		label,
+		fixed(s.voltage_V, 3),
+		fixed(s.Y, 2),
+		fixed(s.x, 4),
+		fixed(s.y, 4),
+		fixed(s.L, 1),
+		fixed(s.a, 1),
+		fixed(s.b, 1),
+		fixed(s.luminance_cdm2, 1),
+		s.srgbHex
+	];
+	const lines = [
+		`at ${cell.room_C} °C, ${report.drive.isStatic ? 'static' : `1/${report.drive.commons} duty`} drive:`,
+		formatTable([
+			['state', 'V rms', 'Y %', 'x', 'y', 'L*', 'a*', 'b*', 'cd/m²', 'sRGB'],
+			row('background', cell.background),
+			row('off segment', cell.off),
+			row('on segment', cell.on)
+		]),
+		`contrast off:on ${fixed(cell.contrastRatio, 2)}, background:on ${fixed(cell.backgroundContrastRatio, 2)}, ΔE00 ${fixed(cell.deltaE00, 1)}, ghost ΔE00 ${fixed(cell.ghostDeltaE00, 2)}`,
+		'',
+		formatTable([
+			['T (°C)', 'V10', 'V50', 'V90', 'τ_on', 'τ_off'],
+			...cell.curves.map((c) => {
+				const r = cell.response.rows.find((x) => x.temperature_C === c.temperature_C);
+				const ms = (v: number | null | undefined) =>
+					v === null || v === undefined ? '—' : `${(v * 1000).toFixed(0)} ms`;
+				return [
+					fixed(c.temperature_C, 1),
+					fixed(c.v10_V, 3),
+					fixed(c.v50_V, 3),
+					fixed(c.v90_V, 3),
+					ms(r?.times?.tauOn_s),
+					ms(r?.times?.tauOff_s)
+				];
+			})
+		]),
+		`switching voltages for the drive check: ${report.thresholdSource}`
+	];
+	for (const f of cell.findings)
+		lines.push(`${f.severity === 'fail' ? 'FAIL' : 'warn'}  ${f.message}`);
+	return lines;
+}
