@@ -2,8 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { cellAt, type CellGeometry } from '../../src/lib/core/lc/cell';
 import { VACUUM_PERMITTIVITY_F_PER_M } from '../../src/lib/core/lc/constants';
 import { energyOfProfile, solveDirector } from '../../src/lib/core/lc/director';
-import { CYANOBIPHENYL_EUTECTIC_HIGH_DN, GENERIC_REFLECTIVE_TN } from '../../src/lib/core/lc/presets';
-import type { DirectorSolution } from '../../src/lib/core/lc/profile';
+import {
+	CYANOBIPHENYL_EUTECTIC_HIGH_DN,
+	GENERIC_REFLECTIVE_TN
+} from '../../src/lib/core/lc/presets';
+import type { NematicState } from '../../src/lib/core/lc/material';
 import { sweepVoltage } from '../../src/lib/core/lc/sweep';
 import { materialAt } from '../../src/lib/core/lc/temperature';
 import { splayThreshold_V, twistedThreshold_V } from '../../src/lib/core/lc/threshold';
@@ -47,10 +50,18 @@ describe('director statics: reference checks', () => {
 		for (const material of [CYANOBIPHENYL_EUTECTIC_HIGH_DN, GENERIC_REFLECTIVE_TN]) {
 			const twisted = tnCell({ pretilt_deg: 0, gapToPitch: 0 }, material);
 			const analyticTn_V = twistedThreshold_V(twisted);
-			rows.push({ name: `${material.id} 90° TN`, actual: extrapolatedOnset_V(twisted, analyticTn_V) / analyticTn_V - 1, expected: 0 });
+			rows.push({
+				name: `${material.id} 90° TN`,
+				actual: extrapolatedOnset_V(twisted, analyticTn_V) / analyticTn_V - 1,
+				expected: 0
+			});
 			const planar = tnCell({ pretilt_deg: 0, gapToPitch: 0, twist_deg: 0 }, material);
 			const analyticSplay_V = splayThreshold_V(planar.material);
-			rows.push({ name: `${material.id} splay`, actual: extrapolatedOnset_V(planar, analyticSplay_V) / analyticSplay_V - 1, expected: 0 });
+			rows.push({
+				name: `${material.id} splay`,
+				actual: extrapolatedOnset_V(planar, analyticSplay_V) / analyticSplay_V - 1,
+				expected: 0
+			});
 		}
 		expectReference({
 			label: 'solver onset / analytic threshold − 1',
@@ -126,7 +137,11 @@ describe('director statics: reference checks', () => {
 				tilt[i] += 1e-3 * Math.sin((trial + 1) * Math.PI * z + trial);
 				twist[i] += 1e-3 * Math.sin((trial + 2) * Math.PI * z) * (trial % 3 === 0 ? 0 : 1);
 			}
-			const g = energyOfProfile({ cell, voltage_V, profile: { gap_m: solution.gap_m, tilt_rad: tilt, twist_rad: twist } });
+			const g = energyOfProfile({
+				cell,
+				voltage_V,
+				profile: { gap_m: solution.gap_m, tilt_rad: tilt, twist_rad: twist }
+			});
 			expect(g).toBeGreaterThan(g0);
 		}
 	});
@@ -155,9 +170,15 @@ describe('director statics: contract and robustness', () => {
 	it('converges for twists 0-270° with matching dopant, up to 10·V_th', () => {
 		const outcomes: Record<string, number> = {};
 		for (const twist_deg of [0, 90, 180, 240, 270]) {
-			const cell = tnCell({ twist_deg, gapToPitch: (0.25 * twist_deg) / 90 }, CYANOBIPHENYL_EUTECTIC_HIGH_DN);
+			const cell = tnCell(
+				{ twist_deg, gapToPitch: (0.25 * twist_deg) / 90 },
+				CYANOBIPHENYL_EUTECTIC_HIGH_DN
+			);
 			const vth_V = twistedThreshold_V(cell);
-			const sweep = sweepVoltage({ cell, voltages_V: [0, 0.5, 1, 1.05, 1.5, 2, 3, 5, 10].map((f) => f * vth_V) });
+			const sweep = sweepVoltage({
+				cell,
+				voltages_V: [0, 0.5, 1, 1.05, 1.5, 2, 3, 5, 10].map((f) => f * vth_V)
+			});
 			for (const solution of sweep) {
 				expect(solution.convergence.converged).toBe(true);
 				expect(Number.isFinite(solution.energy_Jm2)).toBe(true);
@@ -173,7 +194,9 @@ describe('director statics: contract and robustness', () => {
 		const mid = (slices: number) => solveDirector({ cell, voltage_V, slices }).midTilt_rad;
 		const fine = mid(480);
 		const errors = [60, 120, 240].map((slices) => Math.abs(mid(slices) - fine));
-		console.log(`mid-tilt discretisation error vs N = 480: ${errors.map((e) => e.toExponential(2)).join(', ')} rad (N = 60, 120, 240)`);
+		console.log(
+			`mid-tilt discretisation error vs N = 480: ${errors.map((e) => e.toExponential(2)).join(', ')} rad (N = 60, 120, 240)`
+		);
 		expect(errors[0]).toBeLessThan(1e-4);
 		expect(errors[0] / errors[1]).toBeGreaterThan(3);
 	});
@@ -201,24 +224,14 @@ describe('director statics: contract and robustness', () => {
 		expect(() => solveDirector({ cell, voltage_V: 1, slices: 3 })).toThrow(/slices/);
 		expect(() => solveDirector({ cell: { ...cell, gap_um: 0 }, voltage_V: 1 })).toThrow(/gap_um/);
 		const hot = materialAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 120 });
-		expect(() => cellAt({ geometry: TN_GEOMETRY, material: GENERIC_REFLECTIVE_TN, temperature_C: 120 })).toThrow(/isotropic/);
 		expect(() =>
-			solveDirector({ cell: { ...cell, material: hot as unknown as DirectorSolution as never }, voltage_V: 1 })
+			cellAt({ geometry: TN_GEOMETRY, material: GENERIC_REFLECTIVE_TN, temperature_C: 120 })
+		).toThrow(/isotropic/);
+		expect(() =>
+			solveDirector({
+				cell: { ...cell, material: hot as unknown as NematicState },
+				voltage_V: 1
+			})
 		).toThrow(/nematic/);
-	});
-
-	it('solves one warm-started voltage quickly (median printed; loose bound, not a benchmark)', () => {
-		const cell = tnCell();
-		const base = solveDirector({ cell, voltage_V: 2 });
-		const times: number[] = [];
-		for (let run = 0; run < 60; run++) {
-			const start = performance.now();
-			solveDirector({ cell, voltage_V: 2 + 0.05 * ((run % 10) + 1), start: base });
-			times.push(performance.now() - start);
-		}
-		times.sort((a, b) => a - b);
-		const median_ms = times[times.length >> 1];
-		console.log(`warm-started solve, 60 slabs: median ${median_ms.toFixed(3)} ms`);
-		expect(median_ms).toBeLessThan(20); // target 2 ms; loose here so a busy CI machine does not flake
 	});
 });

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { factorBlockTridiagonal, solveBlockTridiagonal } from '../../src/lib/core/lc/blockTridiagonal';
+import {
+	factorBlockTridiagonal,
+	solveBlockTridiagonal
+} from '../../src/lib/core/lc/blockTridiagonal';
 import {
 	assembleDirector,
 	createDirectorWorkspace,
@@ -16,7 +19,8 @@ function hessianEntry(ws: DirectorWorkspace, j: number, k: number): number {
 	if (bj === bk) value = ws.diag[4 * bj + 2 * (j & 1) + (k & 1)];
 	else if (bk === bj + 1) value = ws.upper[4 * bj + 2 * (j & 1) + (k & 1)];
 	else if (bj === bk + 1) value = ws.upper[4 * bk + 2 * (k & 1) + (j & 1)];
-	if ((j & 1) === 0 && (k & 1) === 0) value -= ws.rankOneWeight * ws.couplingTheta[bj] * ws.couplingTheta[bk];
+	if ((j & 1) === 0 && (k & 1) === 0)
+		value -= ws.rankOneWeight * ws.couplingTheta[bj] * ws.couplingTheta[bk];
 	return value;
 }
 
@@ -72,7 +76,9 @@ describe('director energy kernel', () => {
 				worstHessian = Math.max(worstHessian, Math.abs(numeric - hessian[j][k]));
 			}
 		}
-		console.log(`kernel derivatives: worst gradient error ${worstGradient.toExponential(2)}, Hessian ${worstHessian.toExponential(2)} (K11/d units)`);
+		console.log(
+			`kernel derivatives: worst gradient error ${worstGradient.toExponential(2)}, Hessian ${worstHessian.toExponential(2)} (K11/d units)`
+		);
 		expect(worstGradient).toBeLessThan(1e-7);
 		expect(worstHessian).toBeLessThan(1e-7);
 	});

@@ -1,10 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { LcMaterial } from '../../src/lib/core/lc/material';
-import {
-	GENERIC_REFLECTIVE_TN,
-	LC_PRESETS,
-	presetById
-} from '../../src/lib/core/lc/presets';
+import { GENERIC_REFLECTIVE_TN, LC_PRESETS, presetById } from '../../src/lib/core/lc/presets';
 import { indicesAt, materialAt } from '../../src/lib/core/lc/temperature';
 import { twistedThreshold_V } from '../../src/lib/core/lc/threshold';
 import { requireNematic } from '../../src/lib/core/lc/material';
@@ -33,13 +29,19 @@ describe('presets', () => {
 	it('generic reflective-TN preset has the typical values it claims', () => {
 		// Typical values for reflective-TN mixtures (Δn 0.10-0.12 at 589 nm, T_NI ≈ 90 °C,
 		// V_th 1.3-1.6 V, γ1 ≈ 0.15 Pa·s, E_a ≈ 0.35 eV): a plausibility range, not a reference.
-		const { ne, no } = indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: 589.3 });
+		const { ne, no } = indicesAt({
+			material: GENERIC_REFLECTIVE_TN,
+			temperature_C: 25,
+			wavelength_nm: 589.3
+		});
 		expect(ne - no).toBeGreaterThan(0.1);
 		expect(ne - no).toBeLessThan(0.12);
 		expect(GENERIC_REFLECTIVE_TN.clearing_C).toBe(90);
 		expect(GENERIC_REFLECTIVE_TN.gamma1_Pas).toBeCloseTo(0.15, 12);
 		expect(GENERIC_REFLECTIVE_TN.activation_eV).toBeCloseTo(0.35, 12);
-		const state = requireNematic(materialAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25 }));
+		const state = requireNematic(
+			materialAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25 })
+		);
 		for (const gapToPitch of [0, 0.1]) {
 			const vth_V = twistedThreshold_V({ material: state, twist_deg: 90, gapToPitch });
 			expect(vth_V).toBeGreaterThan(1.3);
@@ -62,9 +64,9 @@ describe('validateMaterial', () => {
 		expect(issuesOf({ activation_eV: -0.1 })).toEqual(['activation_eV']);
 		expect(issuesOf({ epsPerpendicular: 0.5 })).toContain('epsPerpendicular');
 		expect(issuesOf({ ordinary: { a: 1.7, b_um2: 0.01, c_um4: 0 } })).toEqual(['extraordinary']);
-		expect(issuesOf({ extraordinary: { a: Number.POSITIVE_INFINITY, b_um2: 0, c_um4: 0 } })).toEqual([
-			'extraordinary.a'
-		]);
+		expect(
+			issuesOf({ extraordinary: { a: Number.POSITIVE_INFINITY, b_um2: 0, c_um4: 0 } })
+		).toEqual(['extraordinary.a']);
 	});
 
 	it('rejects non-positive dielectric anisotropy, which a TN cell cannot switch with', () => {
@@ -75,6 +77,8 @@ describe('validateMaterial', () => {
 	});
 
 	it('makes materialAt throw with the parameter name', () => {
-		expect(() => materialAt({ material: { ...base, k22_pN: -3 }, temperature_C: 25 })).toThrow(/k22_pN/);
+		expect(() => materialAt({ material: { ...base, k22_pN: -3 }, temperature_C: 25 })).toThrow(
+			/k22_pN/
+		);
 	});
 });

@@ -21,7 +21,13 @@ describe('Jakeman-Raynes response times', () => {
 		const rows: ReferenceRow[] = [];
 		for (const [name, gamma1_Pas, gap_um, k_pN, off_ms, on2_ms, on3_ms] of table) {
 			const deltaEps = 10; // any positive Δε: τ_on depends only on V/V_th
-			const probe = jakemanRaynesTimes({ gamma1_Pas, gap_m: gap_um * 1e-6, elastic_N: k_pN * 1e-12, deltaEps, voltage_V: 0 });
+			const probe = jakemanRaynesTimes({
+				gamma1_Pas,
+				gap_m: gap_um * 1e-6,
+				elastic_N: k_pN * 1e-12,
+				deltaEps,
+				voltage_V: 0
+			});
 			const at = (factor: number) =>
 				jakemanRaynesTimes({
 					gamma1_Pas,
@@ -32,8 +38,16 @@ describe('Jakeman-Raynes response times', () => {
 				});
 			expect(probe.tauOn_s).toBeNull();
 			rows.push({ name: `${name} τ_off`, actual: probe.tauOff_s * 1e3, expected: off_ms });
-			rows.push({ name: `${name} τ_on 2V_th`, actual: (at(2).tauOn_s ?? NaN) * 1e3, expected: on2_ms });
-			rows.push({ name: `${name} τ_on 3V_th`, actual: (at(3).tauOn_s ?? NaN) * 1e3, expected: on3_ms });
+			rows.push({
+				name: `${name} τ_on 2V_th`,
+				actual: (at(2).tauOn_s ?? NaN) * 1e3,
+				expected: on2_ms
+			});
+			rows.push({
+				name: `${name} τ_on 3V_th`,
+				actual: (at(3).tauOn_s ?? NaN) * 1e3,
+				expected: on3_ms
+			});
 		}
 		expectReference({
 			label: 'τ (director)',
@@ -75,7 +89,9 @@ describe('Jakeman-Raynes response times', () => {
 		expect(result.tooSlowAt_C.length).toBeGreaterThan(0);
 		for (const t of result.tooSlowAt_C) {
 			const times = byT.get(t)?.times;
-			expect(times === null || times === undefined || times.tauOff_s > 1 || (times.tauOn_s ?? 2) > 1).toBe(true);
+			expect(
+				times === null || times === undefined || times.tauOff_s > 1 || (times.tauOn_s ?? 2) > 1
+			).toBe(true);
 			expect(t).toBeLessThan(0);
 		}
 		const strict = responseVsTemperature({

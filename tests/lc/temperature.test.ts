@@ -26,8 +26,15 @@ describe('temperature model', () => {
 			expect(state.epsParallel).toBeCloseTo(material.epsParallel, 12);
 			expect(state.epsPerpendicular).toBeCloseTo(material.epsPerpendicular, 12);
 			expect(state.gamma1_Pas).toBeCloseTo(material.gamma1_Pas, 14);
-			const { ne, no } = indicesAt({ material, temperature_C: material.reference_C, wavelength_nm: 550 });
-			const neRef = material.extraordinary.a + material.extraordinary.b_um2 / 0.55 ** 2 + material.extraordinary.c_um4 / 0.55 ** 4;
+			const { ne, no } = indicesAt({
+				material,
+				temperature_C: material.reference_C,
+				wavelength_nm: 550
+			});
+			const neRef =
+				material.extraordinary.a +
+				material.extraordinary.b_um2 / 0.55 ** 2 +
+				material.extraordinary.c_um4 / 0.55 ** 4;
 			expect(ne).toBeCloseTo(neRef, 12);
 			expect(no).toBeLessThan(ne);
 		}
@@ -58,7 +65,9 @@ describe('temperature model', () => {
 		expect(s).toBeGreaterThan(1);
 		expect(cold.k11_N / 1e-12 / material.k11_pN).toBeCloseTo(s * s, 12);
 		expect(cold.k33_N / 1e-12 / material.k33_pN).toBeCloseTo(s * s, 12);
-		expect(dielectricAnisotropy(cold) / (material.epsParallel - material.epsPerpendicular)).toBeCloseTo(s, 12);
+		expect(
+			dielectricAnisotropy(cold) / (material.epsParallel - material.epsPerpendicular)
+		).toBeCloseTo(s, 12);
 		expect((cold.epsParallel + 2 * cold.epsPerpendicular) / 3).toBeCloseTo(
 			(material.epsParallel + 2 * material.epsPerpendicular) / 3,
 			12
@@ -70,7 +79,8 @@ describe('temperature model', () => {
 		for (const temperature_C of [90, 95, 150]) {
 			const state = materialAt({ material, temperature_C });
 			expect(state.phase).toBe('isotropic');
-			if (state.phase === 'isotropic') expect(state.message).toMatch(/isotropic.*clearing point 90/);
+			if (state.phase === 'isotropic')
+				expect(state.message).toMatch(/isotropic.*clearing point 90/);
 			expect(() => requireNematic(state)).toThrow(/isotropic/);
 			const indices = indicesAt({ material, temperature_C, wavelength_nm: 550 });
 			expect(indices.phase).toBe('isotropic');
@@ -103,8 +113,12 @@ describe('temperature model', () => {
 		for (const [activation_eV, temperature_C, expected, tolerance] of table) {
 			// Pure-Arrhenius law and a clearing point far away, as the table assumes.
 			const material = materialWith({ activation_eV, viscosityLaw: 'arrhenius', clearing_C: 100 });
-			const ratio = requireNematic(materialAt({ material, temperature_C })).gamma1_Pas / material.gamma1_Pas;
-			expect(ratio).toBeCloseTo(arrheniusFactor({ activation_eV, temperature_C, reference_C: 25 }), 12);
+			const ratio =
+				requireNematic(materialAt({ material, temperature_C })).gamma1_Pas / material.gamma1_Pas;
+			expect(ratio).toBeCloseTo(
+				arrheniusFactor({ activation_eV, temperature_C, reference_C: 25 }),
+				12
+			);
 			expect(Math.abs(ratio - expected)).toBeLessThanOrEqual(tolerance);
 			worstRelative = Math.max(worstRelative, Math.abs(ratio / expected - 1));
 			rows.push({ name: `E_a ${activation_eV} eV, ${temperature_C} °C`, actual: ratio, expected });
@@ -125,7 +139,11 @@ describe('temperature model', () => {
 		const expected =
 			material.gamma1_Pas *
 			orderRatio(material, -30) *
-			arrheniusFactor({ activation_eV: material.activation_eV, temperature_C: -30, reference_C: 25 });
+			arrheniusFactor({
+				activation_eV: material.activation_eV,
+				temperature_C: -30,
+				reference_C: 25
+			});
 		expect(state.gamma1_Pas / expected).toBeCloseTo(1, 12);
 	});
 
@@ -147,7 +165,11 @@ describe('temperature model', () => {
 				});
 			const coefficient_percentPerK = ((vth(25.01) - vth(24.99)) / 0.02 / vth(25)) * 100;
 			const formula_percentPerK = (-0.2 / (2 * (clearing_C - 25))) * 100;
-			rows.push({ name: `T_NI ${clearing_C} °C`, actual: coefficient_percentPerK, expected: formula_percentPerK });
+			rows.push({
+				name: `T_NI ${clearing_C} °C`,
+				actual: coefficient_percentPerK,
+				expected: formula_percentPerK
+			});
 			expect(Math.abs(coefficient_percentPerK - printed)).toBeLessThanOrEqual(0.01);
 		}
 		expectReference({

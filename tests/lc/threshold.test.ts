@@ -11,7 +11,13 @@ import { expectReference, type ReferenceRow } from './reference';
 
 /** A nematic state with the §3.3 constants (ε⊥ 5 so Δε is exact). */
 function stateWith(k11_pN: number, k22_pN: number, k33_pN: number, deltaEps: number) {
-	const material = materialWith({ k11_pN, k22_pN, k33_pN, epsPerpendicular: 5, epsParallel: 5 + deltaEps });
+	const material = materialWith({
+		k11_pN,
+		k22_pN,
+		k33_pN,
+		epsPerpendicular: 5,
+		epsParallel: 5 + deltaEps
+	});
 	return requireNematic(materialAt({ material, temperature_C: material.reference_C }));
 }
 
@@ -29,11 +35,25 @@ describe('analytic thresholds', () => {
 		const elastic: ReferenceRow[] = [];
 		for (const [name, k11, k22, k33, deltaEps, kEff_pN, vth_V, vc_V] of cases) {
 			const material = stateWith(k11, k22, k33, deltaEps);
-			elastic.push({ name, actual: twistElasticConstant_N({ material, twist_deg: 90 }) * 1e12, expected: kEff_pN });
-			voltages.push({ name: `${name} TN`, actual: twistedThreshold_V({ material, twist_deg: 90 }), expected: vth_V });
+			elastic.push({
+				name,
+				actual: twistElasticConstant_N({ material, twist_deg: 90 }) * 1e12,
+				expected: kEff_pN
+			});
+			voltages.push({
+				name: `${name} TN`,
+				actual: twistedThreshold_V({ material, twist_deg: 90 }),
+				expected: vth_V
+			});
 			voltages.push({ name: `${name} splay`, actual: splayThreshold_V(material), expected: vc_V });
 		}
-		expectReference({ label: 'K_eff', source: 'physics notes §3.3 [D]', unit: 'pN', tolerance: 5e-4, rows: elastic });
+		expectReference({
+			label: 'K_eff',
+			source: 'physics notes §3.3 [D]',
+			unit: 'pN',
+			tolerance: 5e-4,
+			rows: elastic
+		});
 		expectReference({
 			label: 'thresholds',
 			source: 'physics notes §3.3 [D]; Schadt & Helfrich 1971; Fréedericksz & Zolina 1933',
@@ -52,7 +72,9 @@ describe('analytic thresholds', () => {
 		);
 		// A dopant of the imposed sense raises the threshold, the opposite sense lowers it.
 		const undoped = twistedThreshold_V({ material, twist_deg: 90 });
-		expect(twistedThreshold_V({ material, twist_deg: 90, gapToPitch: 0.1 })).toBeGreaterThan(undoped);
+		expect(twistedThreshold_V({ material, twist_deg: 90, gapToPitch: 0.1 })).toBeGreaterThan(
+			undoped
+		);
 		expect(twistedThreshold_V({ material, twist_deg: 90, gapToPitch: -0.1 })).toBeLessThan(undoped);
 		// Mirror image: reversing both twist and dopant changes nothing.
 		expect(twistedThreshold_V({ material, twist_deg: -240, gapToPitch: -0.6 })).toBeCloseTo(
@@ -61,7 +83,9 @@ describe('analytic thresholds', () => {
 		);
 		// K_eff = K11 + (K33 − 2K22)(Φ/π)² + 4K22(d/p)(Φ/π) at 270°, d/p = 0.6.
 		const expected_N = (11.1 + (17.1 - 13) * 1.5 ** 2 + 4 * 6.5 * 0.6 * 1.5) * 1e-12;
-		expect(twistElasticConstant_N({ material, twist_deg: 270, gapToPitch: 0.6 }) / expected_N).toBeCloseTo(1, 12);
+		expect(
+			twistElasticConstant_N({ material, twist_deg: 270, gapToPitch: 0.6 }) / expected_N
+		).toBeCloseTo(1, 12);
 		// A strongly reversed dopant makes the untilted state unstable: threshold reported as 0.
 		expect(twistedThreshold_V({ material, twist_deg: 90, gapToPitch: -2 })).toBe(0);
 	});

@@ -15,11 +15,12 @@
  *   of it and no longer shrinking: the round-off floor), a strict local minimum of the discrete G;
  * - 'settled': high twist at high voltage. The mid-plane director becomes vertical and the twist
  *   collapses onto it; the energy keeps creeping down by moving twist between near-vertical nodes
- *   (the continuum optimum is a twist jump at an exactly homeotropic plane, not attained on a
- *   grid), so the Hessian stays indefinite. The iteration stops once some director is within
+ *   (twist costs ∝ cos²θ, so concentrating it where the director is vertical lowers G without a
+ *   minimum being attained on the grid), so the Hessian stays indefinite. The iteration stops once some director is within
  *   0.6° of vertical and, for SETTLE_COUNT iterations in a row, the directors that are not
- *   vertical move less than settle_rad per step (or no descent remains). Away from the vertical
- *   core such profiles are accurate to ≈ 1e-4 rad;
+ *   vertical move less than settle_rad per step (or no descent remains). Continuing such solves
+ *   for thousands of iterations moves the non-vertical directors by ≤ ≈ 1e-4 rad and the
+ *   near-vertical ones (whose azimuth is optically irrelevant) by ≤ ≈ 1e-3 rad;
  * - 'not-converged': iteration limit or no descent possible.
  */
 import { factorBlockTridiagonal, solveBlockTridiagonal } from './blockTridiagonal';
@@ -54,7 +55,7 @@ export interface NewtonReport {
 	gradientNorm: number;
 	/** Largest director rotation max(|Δθ|, |cosθ·Δφ|) of the last step, rad. */
 	lastStep_rad: number;
-	/** True when the final Hessian was positive definite without a shift. */
+	/** True when the final Hessian was positive definite (no shift beyond the 1e-12 floor). */
 	isMinimum: boolean;
 	/** Dimensionless G̃ at the returned state. */
 	energy: number;

@@ -17,8 +17,8 @@ export interface DirectorConvergence {
 	/**
 	 * 'converged': strict local minimum to the tolerance. 'settled': high twist at high voltage, the
 	 * twist collapsing onto a vertical mid-plane director (no attained minimum on the grid); stopped
-	 * once the non-vertical directors move less than 1e-5 rad per step, accurate to ≈ 1e-4 rad
-	 * away from the vertical core. 'not-converged': iteration limit reached.
+	 * once the non-vertical directors move less than 1e-5 rad per step; within ≈ 1e-4 rad of the
+	 * limit away from the vertical core (≈ 1e-3 rad in it). 'not-converged': iteration limit reached.
 	 */
 	status: 'converged' | 'settled' | 'not-converged';
 	/** status !== 'not-converged': the profile is usable. */
