@@ -1,0 +1,105 @@
+/**
+ * Speed figures of the physics core, as medians over repeated runs (machines are shared and noisy:
+ * compare medians and ratios, not single timings). Not a test: it prints, it never fails.
+ *
+ * Run: npm run bench
+ */
+import { GENERIC_REFLECTIVE_TN } from '../src/lib/core/lc/presets';
+import { cellAt } from '../src/lib/core/lc/cell';
+import { solveDirector } from '../src/lib/core/lc/director';
+import { createCellOptics } from '../src/lib/core/cell/cell-optics';
+import { electroOpticCurve } from '../src/lib/core/cell/electro-optic-curve';
+import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../src/lib/core/design/cell-schema';
+import { createStackEvaluator, createStackSpectra } from '../src/lib/core/optics/stack-evaluator';
+import { stackOfCell } from '../src/lib/core/cell/resolve-cell';
+import { indicesAt } from '../src/lib/core/lc/temperature';
+import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
+import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
+import { demoDesign } from '../src/lib/core/design/demo';
+
+interface Row {
+	name: string;
+	target_ms: number | null;
+	median_ms: number;
+	p90_ms: number;
+	runs: number;
+}
+
+function measure(name: string, target_ms: number | null, runs: number, body: (i: number) => void): Row {
+	for (let i = 0; i < Math.min(20, runs); i++) body(i); // warm-up
+	const times: number[] = [];
+	for (let i = 0; i < runs; i++) {
+		const start = performance.now();
+		body(i);
+		times.push(performance.now() - start);
+	}
+	times.sort((a, b) => a - b);
+	return { name, target_ms, median_ms: times[runs >> 1], p90_ms: times[Math.floor(runs * 0.9)], runs };
+}
+
+const cell = cellAt({
+	geometry: { gap_um: 5, twist_deg: 90, pretilt_deg: 2, gapToPitch: 0.1 },
+	material: GENERIC_REFLECTIVE_TN,
+	temperature_C: 25
+});
+const slices = 60;
+const base = solveDirector({ cell, voltage_V: 2, slices });
+const rows: Row[] = [];
+
+rows.push(
+	measure('director solve, one voltage, 60 slices (warm start)', 2, 400, (i) => {
+		solveDirector({ cell, voltage_V: 2 + 0.01 * ((i % 20) + 1), start: base, slices });
+	})
+);
+rows.push(
+	measure('director solve, one voltage, 60 slices (cold, from 0 V)', null, 100, (i) => {
+		solveDirector({ cell, voltage_V: 2 + 0.01 * (i % 20), slices });
+	})
+);
+
+const wavelengths_nm = gridWavelengths_nm(VISIBLE_5NM_GRID);
+const ne = Float64Array.from(wavelengths_nm, (w) => indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: w }).ne);
+const no = Float64Array.from(wavelengths_nm, (w) => indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: w }).no);
+const evaluator = createStackEvaluator({ wavelengths_nm, indicesAt: { ne, no }, stack: stackOfCell(DEFAULT_CELL) });
+const offProfile = solveDirector({ cell, voltage_V: 0, slices });
+const onProfile = solveDirector({ cell, voltage_V: 3, slices });
+const offOut = createStackSpectra(wavelengths_nm.length);
+const onOut = createStackSpectra(wavelengths_nm.length);
+rows.push(
+	measure(`on/off spectra, ${wavelengths_nm.length} wavelengths, normal incidence`, 1, 400, () => {
+		evaluator.evaluate(offProfile, offOut);
+		evaluator.evaluate(onProfile, onOut);
+	})
+);
+
+const opticsAt = [-10, 25, 60].map((temperature_C) => createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C }));
+rows.push(
+	measure('electro-optic curves, 44 voltages × 3 temperatures', 150, 15, () => {
+		for (const optics of opticsAt) electroOpticCurve({ optics });
+	})
+);
+rows.push(
+	measure('electro-optic curves incl. building the 3 cell models', null, 15, () => {
+		for (const temperature_C of [-10, 25, 60]) {
+			electroOpticCurve({ optics: createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C }) });
+		}
+	})
+);
+const demo = demoDesign();
+rows.push(
+	measure('drive check of the demo design', null, 400, () => {
+		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
+	})
+);
+
+const pad = (text: string, width: number) => text.padEnd(width);
+console.log(`Node ${process.version}, ${new Date().toISOString()}`);
+console.log(`${pad('benchmark', 58)}${'median'.padStart(11)}${'p90'.padStart(11)}${'target'.padStart(10)}${'ratio'.padStart(8)}  runs`);
+for (const r of rows) {
+	const ratio = r.target_ms === null ? '' : (r.median_ms / r.target_ms).toFixed(2);
+	console.log(
+		`${pad(r.name, 58)}${(r.median_ms.toFixed(3) + ' ms').padStart(11)}${(r.p90_ms.toFixed(3) + ' ms').padStart(11)}` +
+			`${(r.target_ms === null ? '—' : r.target_ms + ' ms').padStart(10)}${ratio.padStart(8)}  ${r.runs}`
+	);
+}
+console.log('ratio = median / target; below 1 meets the target.');
