@@ -9,4 +9,6 @@ process.env.PORT ??= '3000';
 process.env.HOST ??= '127.0.0.1';
 await import('../build/index.js');
 const host = process.env.HOST === '0.0.0.0' ? 'localhost' : process.env.HOST;
-console.log(`\nsunglyph is running at http://${host}:${process.env.PORT}/  (the demo design opens there)\n`);
+console.log(
+	`\nsunglyph is running at http://${host}:${process.env.PORT}/  (the demo design opens there)\n`
+);

@@ -3,11 +3,21 @@ import { analyzeDrive } from '../../src/lib/core/drive/analyze-drive';
 import type { DriveSettings, Thresholds } from '../../src/lib/core/design/schema';
 
 const drive = (over: Partial<DriveSettings> = {}): DriveSettings => ({
-	commons: 4, biasDivisor: 3, amplitude_V: 3.3, frameRate_Hz: 64, inversion: 'line',
-	temperature: { min_C: -10, max_C: 60 }, ...over
+	commons: 4,
+	biasDivisor: 3,
+	amplitude_V: 3.3,
+	frameRate_Hz: 64,
+	inversion: 'line',
+	temperature: { min_C: -10, max_C: 60 },
+	...over
 });
 const cell = (over: Partial<Thresholds> = {}): Thresholds => ({
-	source: 'manual', v10_V: 1.3, v90_V: 1.7, reference_C: 25, tempCoeff_mV_per_K: -3, ...over
+	source: 'manual',
+	v10_V: 1.3,
+	v90_V: 1.7,
+	reference_C: 25,
+	tempCoeff_mV_per_K: -3,
+	...over
 });
 
 describe('operating window', () => {
@@ -16,21 +26,30 @@ describe('operating window', () => {
 		// At −10 °C: V90 = 1.805 V → V ≥ 1.805/(1/√3)… with k_on = 0.57735; at 60 °C: V10 = 1.195 → V ≤ 3·1.195.
 		expect(r.window.window!.min_V).toBeCloseTo(1.805 / Math.sqrt(1 / 3), 9);
 		expect(r.window.window!.max_V).toBeCloseTo(3 * 1.195, 9);
-		expect(r.window.best_V!).toBeCloseTo(Math.sqrt(r.window.window!.min_V * r.window.window!.max_V), 12);
+		expect(r.window.best_V!).toBeCloseTo(
+			Math.sqrt(r.window.window!.min_V * r.window.window!.max_V),
+			12
+		);
 		expect(r.severity).toBe('pass');
 		// Smallest margin: off pixels at 60 °C, V10 = 1.195 V against V_off = 3.3/3 V.
 		expect(r.window.margin_V).toBeCloseTo(Math.min(3.3 / Math.sqrt(3) - 1.805, 1.195 - 1.1), 9);
 	});
 
 	it('says when no amplitude can work at a temperature (steepness beyond the selection ratio)', () => {
-		const r = analyzeDrive({ drive: drive({ temperature: { min_C: -20, max_C: -20 } }), thresholds: cell({ v90_V: 2.4 }) });
+		const r = analyzeDrive({
+			drive: drive({ temperature: { min_C: -20, max_C: -20 } }),
+			thresholds: cell({ v90_V: 2.4 })
+		});
 		expect(r.severity).toBe('fail');
 		expect(r.findings[0].message).toMatch(/No amplitude works at -20 °C/);
 		expect(r.findings[0].message).toMatch(/ghost/);
 	});
 
 	it('says when temperature drift closes the window, and suggests compensation', () => {
-		const r = analyzeDrive({ drive: drive({ temperature: { min_C: -30, max_C: 85 } }), thresholds: cell({ tempCoeff_mV_per_K: -8 }) });
+		const r = analyzeDrive({
+			drive: drive({ temperature: { min_C: -30, max_C: 85 } }),
+			thresholds: cell({ tempCoeff_mV_per_K: -8 })
+		});
 		expect(r.window.window).toBeNull();
 		expect(r.findings.map((f) => f.message).join(' ')).toMatch(/temperature compensation/);
 	});
@@ -43,7 +62,10 @@ describe('operating window', () => {
 	});
 
 	it('warns about a bias far from the optimum and a flickering frame rate', () => {
-		const r = analyzeDrive({ drive: drive({ commons: 8, biasDivisor: 2, frameRate_Hz: 20 }), thresholds: cell() });
+		const r = analyzeDrive({
+			drive: drive({ commons: 8, biasDivisor: 2, frameRate_Hz: 20 }),
+			thresholds: cell()
+		});
 		const text = r.findings.map((f) => f.message).join(' ');
 		expect(text).toMatch(/1\/3\.83/);
 		expect(text).toMatch(/flicker/);

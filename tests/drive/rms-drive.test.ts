@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { altPleshkoLimit, maxCommonsForSteepness, optimalBiasDivisor, rmsVoltages } from '../../src/lib/core/drive/rms-drive';
+import {
+	altPleshkoLimit,
+	maxCommonsForSteepness,
+	optimalBiasDivisor,
+	rmsVoltages
+} from '../../src/lib/core/drive/rms-drive';
 import { expectWithin } from '../helpers/tolerance';
 
 describe('Alt–Pleshko bound', () => {
@@ -7,23 +12,47 @@ describe('Alt–Pleshko bound', () => {
 		// Source: Alt & Pleshko, IEEE Trans. Electron Devices ED-21(2):146–155 (1974): the maximum
 		// selection ratio of RMS multiplexing; values below are that formula evaluated to 4 decimals.
 		const table: [number, number, number][] = [
-			[2, 2.4142, 2.414], [3, 1.9319, 2.732], [4, 1.7321, 3.0], [6, 1.5427, 3.449], [8, 1.447, 3.828],
-			[16, 1.291, 5.0], [32, 1.1956, 6.657], [64, 1.1339, 9.0], [100, 1.1055, 11.0], [240, 1.0668, 16.492]
+			[2, 2.4142, 2.414],
+			[3, 1.9319, 2.732],
+			[4, 1.7321, 3.0],
+			[6, 1.5427, 3.449],
+			[8, 1.447, 3.828],
+			[16, 1.291, 5.0],
+			[32, 1.1956, 6.657],
+			[64, 1.1339, 9.0],
+			[100, 1.1055, 11.0],
+			[240, 1.0668, 16.492]
 		];
-		expectWithin(table.map(([n, r]) => ({ label: `N=${n}`, expected: r, actual: altPleshkoLimit(n) })), {
-			tolerance: 1e-4, unit: '(ratio)', source: 'Alt & Pleshko 1974'
-		});
-		expectWithin(table.map(([n, , b]) => ({ label: `N=${n}`, expected: b, actual: optimalBiasDivisor(n) })), {
-			tolerance: 1e-3, unit: '(divisor)', source: 'Alt & Pleshko 1974, optimal bias √N+1'
-		});
+		expectWithin(
+			table.map(([n, r]) => ({ label: `N=${n}`, expected: r, actual: altPleshkoLimit(n) })),
+			{
+				tolerance: 1e-4,
+				unit: '(ratio)',
+				source: 'Alt & Pleshko 1974'
+			}
+		);
+		expectWithin(
+			table.map(([n, , b]) => ({ label: `N=${n}`, expected: b, actual: optimalBiasDivisor(n) })),
+			{
+				tolerance: 1e-3,
+				unit: '(divisor)',
+				source: 'Alt & Pleshko 1974, optimal bias √N+1'
+			}
+		);
 	});
 
 	it('is reached by the optimal bias and never exceeded by any other', () => {
 		for (const n of [2, 3, 4, 8, 16, 64]) {
-			const best = rmsVoltages({ commons: n, biasDivisor: optimalBiasDivisor(n), amplitude_V: 1 }).selectionRatio;
+			const best = rmsVoltages({
+				commons: n,
+				biasDivisor: optimalBiasDivisor(n),
+				amplitude_V: 1
+			}).selectionRatio;
 			expect(best).toBeCloseTo(altPleshkoLimit(n), 12);
 			for (let a = 2; a <= 20; a += 0.25) {
-				expect(rmsVoltages({ commons: n, biasDivisor: a, amplitude_V: 1 }).selectionRatio).toBeLessThanOrEqual(best + 1e-12);
+				expect(
+					rmsVoltages({ commons: n, biasDivisor: a, amplitude_V: 1 }).selectionRatio
+				).toBeLessThanOrEqual(best + 1e-12);
 			}
 		}
 	});
@@ -34,7 +63,8 @@ describe('published duty/bias selection ratios', () => {
 		// Source: published LCD-driver data sheets and microcontroller LCD manuals (common values):
 		// 1/4 duty 1/3 bias → √3; 1/3 duty 1/2 bias → √3; 1/2 duty 1/2 or 1/3 bias → √5;
 		// 1/4 duty 1/2 bias → 1.528; 1/6 duty 1/3 bias V_on 0.509, V_off 0.333 of V_LCD.
-		const ratio = (n: number, a: number) => rmsVoltages({ commons: n, biasDivisor: a, amplitude_V: 1 }).selectionRatio;
+		const ratio = (n: number, a: number) =>
+			rmsVoltages({ commons: n, biasDivisor: a, amplitude_V: 1 }).selectionRatio;
 		expectWithin(
 			[
 				{ label: '1/4 duty, 1/3 bias', expected: Math.sqrt(3), actual: ratio(4, 3) },

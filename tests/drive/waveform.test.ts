@@ -28,10 +28,17 @@ describe('multiplex waveform model', () => {
 	});
 
 	it('only uses the bias ladder levels 0, V/a, 2V/a, …, V for integer bias', () => {
-		const wave = multiplexWaveform({ commons: 4, biasDivisor: 3, amplitude_V: 3, inversion: 'line' });
+		const wave = multiplexWaveform({
+			commons: 4,
+			biasDivisor: 3,
+			amplitude_V: 3,
+			inversion: 'line'
+		});
 		const levels = new Set<number>();
 		wave.commonLevels_V.forEach((l) => l.forEach((v) => levels.add(Math.round(v * 1e9) / 1e9)));
-		wave.segmentLevels_V([true, false, true, false]).forEach((v) => levels.add(Math.round(v * 1e9) / 1e9));
+		wave
+			.segmentLevels_V([true, false, true, false])
+			.forEach((v) => levels.add(Math.round(v * 1e9) / 1e9));
 		expect([...levels].sort()).toEqual([0, 1, 2, 3]);
 	});
 });

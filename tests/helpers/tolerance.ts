@@ -10,7 +10,10 @@ export interface ReferenceCase {
 	actual: number;
 }
 
-export function expectWithin(cases: readonly ReferenceCase[], options: { tolerance: number; unit: string; source: string }) {
+export function expectWithin(
+	cases: readonly ReferenceCase[],
+	options: { tolerance: number; unit: string; source: string }
+) {
 	let worst = cases[0];
 	let worstError = -1;
 	for (const c of cases) {
@@ -24,6 +27,9 @@ export function expectWithin(cases: readonly ReferenceCase[], options: { toleran
 		`[${options.source}] ${cases.length} values, worst |Δ| = ${worstError.toExponential(2)} ${options.unit} at ${worst.label} (tolerance ${options.tolerance} ${options.unit})`
 	);
 	for (const c of cases) {
-		expect(Math.abs(c.actual - c.expected), `${c.label}: expected ${c.expected}, got ${c.actual}`).toBeLessThanOrEqual(options.tolerance);
+		expect(
+			Math.abs(c.actual - c.expected),
+			`${c.label}: expected ${c.expected}, got ${c.actual}`
+		).toBeLessThanOrEqual(options.tolerance);
 	}
 }

@@ -6,7 +6,10 @@ import type { Design, Electrode } from '../design/schema';
 import { shapeToPathData } from '../geometry/path-data';
 
 const escapeXml = (text: string) =>
-	text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);
+	text.replace(
+		/[<>&"']/g,
+		(c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!
+	);
 
 export function designToSvg(
 	design: Design,
