@@ -21,7 +21,7 @@ test('changing the bias updates the figures live', async ({ page }) => {
 	await bias.fill('1/1');
 	await expect(page.getByText('not a usable bias')).toBeVisible();
 	await expect(page.getByTestId('selection-ratio')).toHaveText('1.5275');
-	await page.getByTestId('amplitude-input').fill('5');
+	await page.getByTestId('amplitude-input').fill('6');
 	await expect(page.getByTestId('drive-verdict')).toContainText('ghost');
 	await expect(page.getByTestId('overall')).toHaveText('Fails checks');
 });
@@ -34,13 +34,11 @@ test('an invalid file shows path-named errors and keeps the open design', async 
 		name: 'x',
 		glass: { width_mm: -3 }
 	});
-	await page
-		.getByTestId('file-input')
-		.setInputFiles({
-			name: 'broken.json',
-			mimeType: 'application/json',
-			buffer: Buffer.from(broken)
-		});
+	await page.getByTestId('file-input').setInputFiles({
+		name: 'broken.json',
+		mimeType: 'application/json',
+		buffer: Buffer.from(broken)
+	});
 	const error = page.getByTestId('load-error');
 	await expect(error).toContainText('broken.json was not opened');
 	await expect(error).toContainText('glass.width_mm: expected a number greater than 0');
