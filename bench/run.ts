@@ -25,7 +25,12 @@ interface Row {
 	runs: number;
 }
 
-function measure(name: string, target_ms: number | null, runs: number, body: (i: number) => void): Row {
+function measure(
+	name: string,
+	target_ms: number | null,
+	runs: number,
+	body: (i: number) => void
+): Row {
 	for (let i = 0; i < Math.min(20, runs); i++) body(i); // warm-up
 	const times: number[] = [];
 	for (let i = 0; i < runs; i++) {
@@ -34,7 +39,13 @@ function measure(name: string, target_ms: number | null, runs: number, body: (i:
 		times.push(performance.now() - start);
 	}
 	times.sort((a, b) => a - b);
-	return { name, target_ms, median_ms: times[runs >> 1], p90_ms: times[Math.floor(runs * 0.9)], runs };
+	return {
+		name,
+		target_ms,
+		median_ms: times[runs >> 1],
+		p90_ms: times[Math.floor(runs * 0.9)],
+		runs
+	};
 }
 
 const cell = cellAt({
@@ -58,9 +69,19 @@ rows.push(
 );
 
 const wavelengths_nm = gridWavelengths_nm(VISIBLE_5NM_GRID);
-const ne = Float64Array.from(wavelengths_nm, (w) => indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: w }).ne);
-const no = Float64Array.from(wavelengths_nm, (w) => indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: w }).no);
-const evaluator = createStackEvaluator({ wavelengths_nm, indicesAt: { ne, no }, stack: stackOfCell(DEFAULT_CELL) });
+const ne = Float64Array.from(
+	wavelengths_nm,
+	(w) => indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: w }).ne
+);
+const no = Float64Array.from(
+	wavelengths_nm,
+	(w) => indicesAt({ material: GENERIC_REFLECTIVE_TN, temperature_C: 25, wavelength_nm: w }).no
+);
+const evaluator = createStackEvaluator({
+	wavelengths_nm,
+	indicesAt: { ne, no },
+	stack: stackOfCell(DEFAULT_CELL)
+});
 const offProfile = solveDirector({ cell, voltage_V: 0, slices });
 const onProfile = solveDirector({ cell, voltage_V: 3, slices });
 const offOut = createStackSpectra(wavelengths_nm.length);
@@ -72,7 +93,9 @@ rows.push(
 	})
 );
 
-const opticsAt = [-10, 25, 60].map((temperature_C) => createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C }));
+const opticsAt = [-10, 25, 60].map((temperature_C) =>
+	createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C })
+);
 rows.push(
 	measure('electro-optic curves, 44 voltages × 3 temperatures', 150, 15, () => {
 		for (const optics of opticsAt) electroOpticCurve({ optics });
@@ -81,7 +104,9 @@ rows.push(
 rows.push(
 	measure('electro-optic curves incl. building the 3 cell models', null, 15, () => {
 		for (const temperature_C of [-10, 25, 60]) {
-			electroOpticCurve({ optics: createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C }) });
+			electroOpticCurve({
+				optics: createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C })
+			});
 		}
 	})
 );
@@ -94,7 +119,9 @@ rows.push(
 
 const pad = (text: string, width: number) => text.padEnd(width);
 console.log(`Node ${process.version}, ${new Date().toISOString()}`);
-console.log(`${pad('benchmark', 58)}${'median'.padStart(11)}${'p90'.padStart(11)}${'target'.padStart(10)}${'ratio'.padStart(8)}  runs`);
+console.log(
+	`${pad('benchmark', 58)}${'median'.padStart(11)}${'p90'.padStart(11)}${'target'.padStart(10)}${'ratio'.padStart(8)}  runs`
+);
 for (const r of rows) {
 	const ratio = r.target_ms === null ? '' : (r.median_ms / r.target_ms).toFixed(2);
 	console.log(

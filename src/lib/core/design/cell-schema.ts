@@ -34,7 +34,10 @@ export const customMaterialSchema = z
 		viscosityLaw: z.enum(['order-arrhenius', 'arrhenius'])
 	})
 	.refine((m) => m.clearing_C > m.reference_C, 'expected clearing_C above reference_C')
-	.refine((m) => m.epsParallel > m.epsPerpendicular, 'a TN fluid needs epsParallel above epsPerpendicular');
+	.refine(
+		(m) => m.epsParallel > m.epsPerpendicular,
+		'a TN fluid needs epsParallel above epsPerpendicular'
+	);
 
 export const materialChoiceSchema = z.union([
 	z.strictObject({ preset: z.string().min(1) }),
