@@ -23,6 +23,8 @@ export interface DesignReport {
 	/** Null when the cell was not evaluated (yet) or could not be. */
 	cell: CellReport | null;
 	cellError: string | null;
+	/** Findings about the optics: the cell's own, a failed model, entered values the model disputes. */
+	opticsFindings: Finding[];
 	/** Where the drive check's V10/V90 came from. */
 	thresholdSource: 'entered' | 'cell model';
 	severity: Severity;
@@ -55,6 +57,7 @@ export function analyzeDesign(
 		drive,
 		cell,
 		cellError,
+		opticsFindings: cellFindings,
 		thresholdSource: useModel ? 'cell model' : 'entered',
 		severity: overallSeverity([...wiring.findings, ...drive.findings, ...cellFindings])
 	};
