@@ -8,6 +8,10 @@ import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
 
+export const CAUTION =
+	'Predictions are models. Where a misreading can hurt someone, confirm with measured samples\n' +
+	'of the glass and follow the applicable product standards and local regulations.';
+
 export const CHECK_HELP = `Usage: sunglyph check <design.json> [--json]
 
 Validates a design file and checks its wiring and multiplexed drive over the operating
@@ -68,6 +72,7 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 			'',
 			`Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`
 		);
+		lines.push('', CAUTION);
 		io.out(lines.join('\n') + '\n');
 	}
 	return report.severity === 'fail' ? EXIT.checkFailed : EXIT.ok;
