@@ -5,6 +5,7 @@
 import type { Design } from '$lib/core/design/schema';
 import type { CellReport } from '$lib/core/cell/analyze-cell';
 import type { CellRequest, CellResponse } from '$lib/workers/cell-protocol';
+import { createCellWorker } from '$lib/workers/create-cell-worker';
 
 const DEBOUNCE_MS = 120;
 
@@ -27,9 +28,7 @@ export class CellAnalysis {
 
 	/** Call from the browser only; returns a cleanup. */
 	start(): () => void {
-		this.#worker = new Worker(new URL('../workers/cell.worker.ts', import.meta.url), {
-			type: 'module'
-		});
+		this.#worker = createCellWorker();
 		this.#worker.onmessage = (event: MessageEvent<CellResponse>) => this.#receive(event.data);
 		this.#worker.onerror = (event) => {
 			this.busy = false;
