@@ -8,7 +8,8 @@
 import { writeFileSync } from 'node:fs';
 import type { Contour, Design, Electrode, Point } from '../src/lib/core/design/schema';
 import { DESIGN_FORMAT, DESIGN_VERSION } from '../src/lib/core/design/schema';
-import { sevenSegmentDigit, SEVEN_SEGMENT_NAMES } from '../src/lib/core/glyphs/seven-segment';
+import { generateSevenSegment } from '../src/lib/core/glyphs/seven-segment';
+import { generateBarGraph } from '../src/lib/core/glyphs/bar-graph';
 import { serializeDesign } from '../src/lib/core/design/parse-design';
 import { DEFAULT_CELL } from '../src/lib/core/design/cell-schema';
 
@@ -45,29 +46,34 @@ function add(e: Omit<Electrode, 'holes' | 'common' | 'line'> & { holes?: Contour
 	return e.id;
 }
 
-// Digits: 12 mm high for reading across a garden shed at arm's length and beyond.
-const digit = { height_mm: 12, width_mm: 7, stroke_mm: 1.5, gap_mm: 0.12, slant_deg: 6 };
+// Digits: 12 mm high for reading across a garden shed at arm's length and beyond. Each digit is a
+// regenerable group: its members are the generator's parts in order (a … g, dp).
+const digit = {
+	height_mm: 12,
+	width_mm: 7,
+	stroke_mm: 1.5,
+	gap_mm: 0.12,
+	slant_deg: 6,
+	decimalPoint: true
+};
 const digitX = [8, 18, 31, 41];
 const digitTop = 13;
 digitX.forEach((x, index) => {
 	const n = index + 1;
-	const shapes = sevenSegmentDigit({ ...digit, x_mm: x, y_mm: digitTop });
-	const members = SEVEN_SEGMENT_NAMES.map((s) =>
-		add({ id: `d${n}${s}`, name: `${n}${s.toUpperCase()}`, kind: 'segment', outline: shapes[s] })
-	);
-	members.push(
+	const generated = generateSevenSegment({ ...digit, x_mm: x, y_mm: digitTop });
+	const members = generated.parts.map((part) =>
 		add({
-			id: `dp${n}`,
-			name: `DP${n}`,
+			id: part.key === 'dp' ? `dp${n}` : `d${n}${part.key}`,
+			name: part.key === 'dp' ? `DP${n}` : `${n}${part.key.toUpperCase()}`,
 			kind: 'segment',
-			outline: rect(x + digit.width_mm + 0.45, digitTop + digit.height_mm - 1.5, 1.5, 1.5)
+			outline: part.outline
 		})
 	);
 	groups.push({
 		id: `digit${n}`,
 		name: `Digit ${n}`,
 		members,
-		generator: { kind: 'seven-segment', params: { ...digit, x_mm: x, y_mm: digitTop } }
+		generator: { kind: generated.kind, params: generated.params }
 	});
 });
 add({
@@ -84,25 +90,22 @@ add({
 });
 
 // Ten-step soil-moisture bar under the digits.
-const bars: string[] = [];
-for (let i = 0; i < 10; i++) {
-	bars.push(
-		add({
-			id: `bar${i + 1}`,
-			name: `BAR${i + 1}`,
-			kind: 'segment',
-			outline: rect(8 + i * 4.8, 29.5, 4.2, 2.2)
-		})
-	);
-}
+const moisture = generateBarGraph({
+	count: 10,
+	x_mm: 8,
+	y_mm: 29.5,
+	width_mm: 4.2,
+	height_mm: 2.2,
+	spacing_mm: 0.6
+});
+const bars = moisture.parts.map((part, i) =>
+	add({ id: `bar${i + 1}`, name: `BAR${i + 1}`, kind: 'segment', outline: part.outline })
+);
 groups.push({
 	id: 'moisture',
 	name: 'Moisture bar',
 	members: bars,
-	generator: {
-		kind: 'bar-graph',
-		params: { count: 10, x_mm: 8, y_mm: 29.5, width_mm: 4.2, height_mm: 2.2, pitch_mm: 4.8 }
-	}
+	generator: { kind: moisture.kind, params: moisture.params }
 });
 
 // Battery gauge: a frame with a terminal nub, and three level cells inside.

@@ -10,7 +10,12 @@ export interface Bounds {
 	maxY: number;
 }
 
-export const EMPTY_BOUNDS: Bounds = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
+export const EMPTY_BOUNDS: Bounds = {
+	minX: Infinity,
+	minY: Infinity,
+	maxX: -Infinity,
+	maxY: -Infinity
+};
 
 export function contourBounds(contour: Contour, into: Bounds = { ...EMPTY_BOUNDS }): Bounds {
 	for (const p of contour) {

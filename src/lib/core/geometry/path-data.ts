@@ -32,6 +32,9 @@ export function contourToPathData(contour: Contour, digits = 4): string {
 }
 
 /** Outline plus holes as one path, to be filled with the even-odd rule. */
-export function shapeToPathData(shape: { outline: Contour; holes: readonly Contour[] }, digits = 4): string {
+export function shapeToPathData(
+	shape: { outline: Contour; holes: readonly Contour[] },
+	digits = 4
+): string {
 	return [shape.outline, ...shape.holes].map((c) => contourToPathData(c, digits)).join('');
 }

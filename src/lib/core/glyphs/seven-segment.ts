@@ -1,82 +1,104 @@
 /**
- * Parametric 7-segment digits. Each segment is a hexagon along its centre line with 45° pointed
- * ends at the joints, so neighbouring segments meet along mitre lines; shortening every segment by
- * gap/√2 at each end leaves exactly `gap_mm` between neighbours, measured perpendicular to the
- * mitre. The digit's bounding box before slant is width × height. Slant shears x by −tan(slant)·y
- * about the baseline, leaning the digit to the right as in common italic numerals.
+ * Parametric 7-segment digits. Segment letters follow the usual convention: a top, b upper right,
+ * c lower right, d bottom, e lower left, f upper left, g middle; an optional decimal point `dp`
+ * sits right of the baseline corner.
  *
- * Segment letters follow the usual convention: a top, b upper right, c lower right, d bottom,
- * e lower left, f upper left, g middle.
+ * Geometry (see segment-frame.ts and segment-ends.ts): the box before slant is width × height with
+ * its top-left at (x_mm, y_mm); bars are stroke_mm wide perpendicular to themselves also when
+ * slanted; neighbouring segments are exactly gap_mm apart; the slant is a shear about the baseline
+ * that leans the digit to the right for positive angles.
  */
 import type { Contour } from '../design/schema';
+import { GlyphError, type ElectrodeDraft, type GeneratedGroup } from './glyph-types';
+import { dotContour, markSpacing } from './marks';
+import { segmentFrame } from './segment-frame';
+import { layoutBars, type BarDef } from './segment-layout';
+import {
+	segmentCharacterSchema,
+	type SegmentCharacterInput,
+	type SegmentCharacterParams
+} from './segment-params';
 
 export type SevenSegmentName = 'a' | 'b' | 'c' | 'd' | 'e' | 'f' | 'g';
 export const SEVEN_SEGMENT_NAMES: readonly SevenSegmentName[] = ['a', 'b', 'c', 'd', 'e', 'f', 'g'];
 
-export interface SevenSegmentParams {
-	x_mm: number;
-	y_mm: number;
-	height_mm: number;
-	width_mm: number;
-	stroke_mm: number;
-	gap_mm: number;
-	slant_deg: number;
+const SEVEN_SEGMENT_BARS: readonly BarDef[] = [
+	{ key: 'a', from: 'LT', to: 'RT' },
+	{ key: 'b', from: 'RT', to: 'RM' },
+	{ key: 'c', from: 'RM', to: 'RB' },
+	{ key: 'd', from: 'LB', to: 'RB' },
+	{ key: 'e', from: 'LM', to: 'LB' },
+	{ key: 'f', from: 'LT', to: 'LM' },
+	{ key: 'g', from: 'LM', to: 'RM' }
+];
+
+/** Proportions below which bars would vanish or collide. */
+export function checkSevenSegmentProportions(p: SegmentCharacterParams): void {
+	if (p.width_mm < 3 * p.stroke_mm + 2 * p.gap_mm)
+		throw new GlyphError('the digit is too narrow: width must be at least 3 strokes plus 2 gaps');
+	if (p.height_mm < 5 * p.stroke_mm + 4 * p.gap_mm)
+		throw new GlyphError('the digit is too short: height must be at least 5 strokes plus 4 gaps');
 }
 
-type Vec = readonly [number, number];
-
-/** A hexagonal bar from p0 to p1 with pointed ends, pulled back by `inset` at both ends. */
-export function pointedBar(p0: Vec, p1: Vec, halfWidth: number, inset: number): Vec[] {
-	const length = Math.hypot(p1[0] - p0[0], p1[1] - p0[1]);
-	const ux = (p1[0] - p0[0]) / length;
-	const uy = (p1[1] - p0[1]) / length;
-	const nx = -uy;
-	const ny = ux;
-	const at = (s: number, n: number): Vec => [p0[0] + ux * s + nx * n, p0[1] + uy * s + ny * n];
-	return [
-		at(inset, 0),
-		at(inset + halfWidth, halfWidth),
-		at(length - inset - halfWidth, halfWidth),
-		at(length - inset, 0),
-		at(length - inset - halfWidth, -halfWidth),
-		at(inset + halfWidth, -halfWidth)
-	];
+export function sevenSegmentOutlines(
+	params: SegmentCharacterParams
+): Record<SevenSegmentName, Contour> {
+	checkSevenSegmentProportions(params);
+	return layoutBars(segmentFrame(params), SEVEN_SEGMENT_BARS) as Record<SevenSegmentName, Contour>;
 }
 
-export function shear(points: readonly Vec[], options: { slant_deg: number; baseline: number }): Vec[] {
-	const k = Math.tan((options.slant_deg * Math.PI) / 180);
-	return points.map(([x, y]) => [x - k * (y - options.baseline), y]);
+/** The decimal point right of a character's baseline corner (unslanted box, then sheared). */
+export function decimalPointAfter(params: SegmentCharacterParams): Contour {
+	const size = params.stroke_mm;
+	const baseline = params.y_mm + params.height_mm;
+	return dotContour({
+		x_mm: params.x_mm + params.width_mm + markSpacing(params),
+		y_mm: baseline - size,
+		size_mm: size,
+		style: params.style,
+		baseline,
+		slant_deg: params.slant_deg
+	});
 }
 
-export function sevenSegmentDigit(params: SevenSegmentParams): Record<SevenSegmentName, Contour> {
-	const { x_mm: x0, y_mm: y0, height_mm: h, width_mm: w, stroke_mm: t, gap_mm: gap } = params;
-	const half = t / 2;
-	const left = x0 + half;
-	const right = x0 + w - half;
-	const top = y0 + half;
-	const middle = y0 + h / 2;
-	const bottom = y0 + h - half;
-	const inset = gap / Math.SQRT2;
-	const centreLines: Record<SevenSegmentName, [Vec, Vec]> = {
-		a: [[left, top], [right, top]],
-		b: [[right, top], [right, middle]],
-		c: [[right, middle], [right, bottom]],
-		d: [[right, bottom], [left, bottom]],
-		e: [[left, bottom], [left, middle]],
-		f: [[left, middle], [left, top]],
-		g: [[left, middle], [right, middle]]
-	};
-	const result = {} as Record<SevenSegmentName, Contour>;
-	for (const name of SEVEN_SEGMENT_NAMES) {
-		const [p0, p1] = centreLines[name];
-		const bar = shear(pointedBar(p0, p1, half, inset), { slant_deg: params.slant_deg, baseline: y0 + h });
-		result[name] = bar.map(([x, y]) => ({ x, y }));
-	}
-	return result;
+/** Outlines keyed by segment letter (kept for scripts that place digits by hand). */
+export function sevenSegmentDigit(
+	params: SegmentCharacterInput
+): Record<SevenSegmentName, Contour> {
+	return sevenSegmentOutlines(segmentCharacterSchema.parse(params));
 }
 
-/** Segments lit for each character a 7-segment digit can show. */
+export function generateSevenSegment(
+	input: SegmentCharacterInput,
+	options: { namePrefix?: string } = {}
+): GeneratedGroup {
+	const params = segmentCharacterSchema.parse(input);
+	const outlines = sevenSegmentOutlines(params);
+	const prefix = options.namePrefix ?? '';
+	const parts: ElectrodeDraft[] = SEVEN_SEGMENT_NAMES.map((s) => ({
+		key: s,
+		name: `${prefix}${s.toUpperCase()}`,
+		kind: 'segment',
+		outline: outlines[s],
+		holes: []
+	}));
+	if (params.decimalPoint)
+		parts.push({
+			key: 'dp',
+			name: `${prefix}DP`,
+			kind: 'segment',
+			outline: decimalPointAfter(params),
+			holes: []
+		});
+	return { kind: 'seven-segment', params, name: '7-segment digit', idPrefix: 'digit', parts };
+}
+
+/** Segments lit for each character a 7-segment digit can show (case matters where both exist). */
+// prettier-ignore
 export const SEVEN_SEGMENT_CHARSET: Readonly<Record<string, string>> = {
 	'0': 'abcdef', '1': 'bc', '2': 'abdeg', '3': 'abcdg', '4': 'bcfg', '5': 'acdfg',
-	'6': 'acdefg', '7': 'abc', '8': 'abcdefg', '9': 'abcdfg', '-': 'g', ' ': ''
+	'6': 'acdefg', '7': 'abc', '8': 'abcdefg', '9': 'abcdfg', '-': 'g', ' ': '', _: 'd', '=': 'dg',
+	A: 'abcefg', b: 'cdefg', C: 'adef', c: 'deg', d: 'bcdeg', E: 'adefg', F: 'aefg', G: 'acdef',
+	H: 'bcefg', h: 'cefg', I: 'ef', J: 'bcde', L: 'def', n: 'ceg', o: 'cdeg', P: 'abefg', q: 'abcfg',
+	r: 'eg', S: 'acdfg', t: 'defg', U: 'bcdef', u: 'cde', y: 'bcdfg'
 };
