@@ -1,7 +1,8 @@
 import { expect, test } from '@playwright/test';
+import { openApp } from './ready';
 
 test('the cell panel shows predicted colours, curves and reacts to the gap', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	await page.getByTestId('view-cell').click();
 	await expect(page.getByTestId('cell-results')).toBeVisible({ timeout: 20_000 });
 	await expect(page.getByTestId('spectra-plot').locator('svg').first()).toBeVisible();
@@ -15,7 +16,7 @@ test('the cell panel shows predicted colours, curves and reacts to the gap', asy
 });
 
 test('a bad cell value is refused with a reason and nothing breaks', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	await page.getByTestId('view-cell').click();
 	await expect(page.getByTestId('cell-results')).toBeVisible({ timeout: 20_000 });
 	await page.getByTestId('gap-input').fill('-2');
@@ -27,7 +28,7 @@ test('a bad cell value is refused with a reason and nothing breaks', async ({ pa
 });
 
 test('the drive check follows the cell model over temperature', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	await page.getByTestId('view-cell').click();
 	await expect(page.getByTestId('cell-results')).toBeVisible({ timeout: 20_000 });
 	await page.getByTestId('view-drive').click();

@@ -1,7 +1,8 @@
 import { expect, test } from '@playwright/test';
+import { openApp } from './ready';
 
 test('opens with the demo drawn to scale and its drive verdict', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	await expect(page.getByTestId('design-name')).toContainText('irrigation controller');
 	await expect(page.locator('[data-electrode]')).toHaveCount(53);
 	await expect(page.getByTestId('selection-ratio')).toHaveText('1.7321');
@@ -12,7 +13,7 @@ test('opens with the demo drawn to scale and its drive verdict', async ({ page }
 });
 
 test('changing the bias updates the figures live', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	await expect(page.getByTestId('selection-ratio')).toHaveText('1.7321');
 	const bias = page.getByTestId('bias-input');
 	await bias.fill('1/2');
@@ -27,7 +28,7 @@ test('changing the bias updates the figures live', async ({ page }) => {
 });
 
 test('an invalid file shows path-named errors and keeps the open design', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	const broken = JSON.stringify({
 		format: 'sunglyph-design',
 		version: 2,
@@ -47,7 +48,7 @@ test('an invalid file shows path-named errors and keeps the open design', async 
 });
 
 test('saves the design and opens it again', async ({ page }) => {
-	await page.goto('/');
+	await openApp(page);
 	await page.getByTestId('amplitude-input').fill('3.4');
 	const download = page.waitForEvent('download');
 	await page.getByTestId('save-file').click();
@@ -56,6 +57,7 @@ test('saves the design and opens it again', async ({ page }) => {
 	const saved = JSON.parse(fs.readFileSync(file, 'utf8'));
 	expect(saved.drive.amplitude_V).toBe(3.4);
 	await page.reload();
+	await expect(page.locator('[data-hydrated="true"]')).toBeVisible();
 	await page.getByTestId('file-input').setInputFiles(file);
 	await expect(page.getByTestId('amplitude-input')).toHaveValue('3.4');
 });
