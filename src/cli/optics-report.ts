@@ -46,10 +46,22 @@ export function opticsSummary(report: DesignReport) {
 	};
 }
 
-export function opticsLines(report: DesignReport): string[] {
-	const cell = report.cell;
-	if (!cell) return [`FAIL  ${report.cellError ?? 'the cell was not evaluated'}`];
-	const row = (label: string, s: PixelAppearance) => [
+export const PIXEL_TABLE_HEAD = [
+	'state',
+	'V rms',
+	'Y %',
+	'x',
+	'y',
+	'L*',
+	'a*',
+	'b*',
+	'cd/m²',
+	'sRGB'
+];
+
+/** One table row describing a pixel state. */
+export function pixelRow(label: string, s: PixelAppearance): string[] {
+	return [
 		label,
 		fixed(s.voltage_V, 3),
 		fixed(s.Y, 2),
@@ -61,13 +73,18 @@ export function opticsLines(report: DesignReport): string[] {
 		fixed(s.luminance_cdm2, 1),
 		s.srgbHex
 	];
+}
+
+export function opticsLines(report: DesignReport): string[] {
+	const cell = report.cell;
+	if (!cell) return [`FAIL  ${report.cellError ?? 'the cell was not evaluated'}`];
 	const lines = [
 		`at ${cell.room_C} °C, ${report.drive.isStatic ? 'static' : `1/${report.drive.commons} duty`} drive:`,
 		formatTable([
-			['state', 'V rms', 'Y %', 'x', 'y', 'L*', 'a*', 'b*', 'cd/m²', 'sRGB'],
-			row('background', cell.background),
-			row('off segment', cell.off),
-			row('on segment', cell.on)
+			PIXEL_TABLE_HEAD,
+			pixelRow('background', cell.background),
+			pixelRow('off segment', cell.off),
+			pixelRow('on segment', cell.on)
 		]),
 		`contrast off:on ${fixed(cell.contrastRatio, 2)}, background:on ${fixed(cell.backgroundContrastRatio, 2)}, ΔE00 ${fixed(cell.deltaE00, 1)}, ghost ΔE00 ${fixed(cell.ghostDeltaE00, 2)}`,
 		'',

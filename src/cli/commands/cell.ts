@@ -15,6 +15,7 @@ import { parseNumber } from '../parse-numbers';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { fixed, formatTable } from '../table';
+import { PIXEL_TABLE_HEAD, pixelRow } from '../optics-report';
 
 const OPTION_OF_FIELD: Record<string, string> = {
 	gap_um: '--gap-um',
@@ -181,17 +182,6 @@ export function runCell(args: string[], io: CliIo): number {
 		);
 		return EXIT.ok;
 	}
-	const row = (label: string, s: typeof result.off) => [
-		label,
-		fixed(s.voltage_V, 3),
-		fixed(s.Y, 2),
-		fixed(s.x, 4),
-		fixed(s.y, 4),
-		fixed(s.L, 1),
-		fixed(s.a, 1),
-		fixed(s.b, 1),
-		s.srgbHex
-	];
 	io.out(
 		[
 			formatTable([
@@ -203,11 +193,7 @@ export function runCell(args: string[], io: CliIo): number {
 				['contrast ratio', fixed(result.contrastRatio, 2)]
 			]),
 			'',
-			formatTable([
-				['state', 'V', 'Y %', 'x', 'y', 'L*', 'a*', 'b*', 'sRGB'],
-				row('off', result.off),
-				row('on', result.on)
-			])
+			formatTable([PIXEL_TABLE_HEAD, pixelRow('off', result.off), pixelRow('on', result.on)])
 		].join('\n') + '\n'
 	);
 	return EXIT.ok;
