@@ -1,6 +1,8 @@
 /**
  * The open design and its file identity. The design is replaced, never mutated, so every change
- * is one assignment that Svelte can track and the history can diff.
+ * is one assignment that Svelte can track and the history can diff. `documentSerial` changes when
+ * a different document is opened (file, recovery, demo), which tells the editor to start a fresh
+ * undo history instead of recording the swap as an edit.
  */
 import { getContext, setContext } from 'svelte';
 import type { Design } from '$lib/core/design/schema';
@@ -10,6 +12,7 @@ import { parseDesignText, serializeDesign } from '$lib/core/design/parse-design'
 export class DesignState {
 	design = $state.raw<Design>(null as unknown as Design);
 	fileName = $state('demo.sunglyph.json');
+	documentSerial = $state(0);
 	/** Problems with the last file the user tried to open; the open design is untouched by them. */
 	loadIssues = $state.raw<DesignIssue[]>([]);
 	loadSource = $state('');
@@ -22,6 +25,13 @@ export class DesignState {
 		this.design = next;
 	}
 
+	/** Swaps in another document (recovered work, the demo): a new undo history starts. */
+	replaceDocument(next: Design, fileName: string) {
+		this.design = next;
+		this.fileName = fileName;
+		this.documentSerial++;
+	}
+
 	/** Opens JSON text; on any problem keeps the current design and records the issues. */
 	open(text: string, fileName: string): boolean {
 		const result = parseDesignText(text);
@@ -31,8 +41,7 @@ export class DesignState {
 			return false;
 		}
 		this.loadIssues = [];
-		this.design = result.design;
-		this.fileName = fileName;
+		this.replaceDocument(result.design, fileName);
 		return true;
 	}
 
