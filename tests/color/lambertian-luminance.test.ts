@@ -8,7 +8,7 @@ const L = (reflectance: number, illuminance_lx: number) =>
 
 describe('lambertianLuminance_cdm2', () => {
 	it('matches the worked values (half a unit in the last published digit)', () => {
-		const source = 'L = ρE/π; values derived in physics-notes §6';
+		const source = 'values derived from L = ρE/π (Lambertian reflector, standard photometry)';
 		expectWithinReference({
 			quantity: 'luminance, office to indoor',
 			unit: 'cd/m²',

@@ -44,7 +44,7 @@ describe('director statics: reference checks', () => {
 
 	it('onset of mid-plane tilt reproduces the analytic 90° TN and splay thresholds within 2 %', () => {
 		// Analytic references: Schadt & Helfrich, APL 18:127 (1971) (90° TN) and Fréedericksz &
-		// Zolina (1933) (splay), physics notes §3.3. The discrete solver's onset is found by
+		// Zolina, Trans. Faraday Soc. 29:919 (1933) (splay). The discrete solver's onset is found by
 		// extrapolating θ_m² linearly to zero just above threshold (zero pretilt, no dopant).
 		const rows = [];
 		for (const material of [CYANOBIPHENYL_EUTECTIC_HIGH_DN, GENERIC_REFLECTIVE_TN]) {
@@ -65,7 +65,7 @@ describe('director statics: reference checks', () => {
 		}
 		expectReference({
 			label: 'solver onset / analytic threshold − 1',
-			source: 'Schadt & Helfrich 1971; Fréedericksz & Zolina 1933; physics notes §3.3',
+			source: 'Schadt & Helfrich 1971; Fréedericksz & Zolina 1933',
 			unit: '(relative)',
 			tolerance: 0.02,
 			rows

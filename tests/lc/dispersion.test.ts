@@ -8,8 +8,8 @@ import {
 import { indicesAt } from '../../src/lib/core/lc/temperature';
 import { expectReference, type ReferenceRow } from './reference';
 
-// Physics notes §4.1 check table [D], computed from the extended Cauchy coefficients of
-// Li, Wen, Gauza, Lu & Wu, J. Display Technol. 1:51 (2005), at 25 °C, rounded to 1e-4.
+// Check values derived from the extended Cauchy coefficients of Li, Wen, Gauza, Lu & Wu,
+// J. Display Technol. 1:51 (2005), at 25 °C, rounded to 1e-4.
 const TABLE: [string, typeof CYANOBIPHENYL_SINGLE, number, number, number, number][] = [
 	['E7', CYANOBIPHENYL_EUTECTIC_HIGH_DN, 450, 1.8001, 1.5419, 0.2582],
 	['E7', CYANOBIPHENYL_EUTECTIC_HIGH_DN, 550, 1.7497, 1.5261, 0.2236],
@@ -37,7 +37,8 @@ describe('extended Cauchy dispersion', () => {
 		}
 		expectReference({
 			label: 'Cauchy indices',
-			source: 'Li, Wen, Gauza, Lu & Wu, J. Display Technol. 1:51 (2005); physics notes §4.1',
+			source:
+				'derived from the Cauchy fits of Li, Wen, Gauza, Lu & Wu, J. Display Technol. 1:51 (2005)',
 			unit: '(index)',
 			tolerance: 1e-4,
 			rows

@@ -1,5 +1,5 @@
 /**
- * Test materials built from the constants quoted in physics notes §3.3 and §5, so analytic
+ * Test materials built from explicitly given constants (each test states its own), so analytic
  * references can be reproduced exactly (the presets carry rounded or memory values).
  */
 import type { LcMaterial } from '../../src/lib/core/lc/material';

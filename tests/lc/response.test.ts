@@ -9,9 +9,9 @@ import {
 import { expectReference, type ReferenceRow } from './reference';
 
 describe('Jakeman-Raynes response times', () => {
-	it('reproduce the physics notes §5 worked table to 0.5 ms', () => {
-		// Physics notes §5 [D]: values computed from τ_off = γ1d²/(Kπ²), τ_on = τ_off/((V/V_th)² − 1)
-		// [Jakeman & Raynes, Phys. Lett. A 39:69 (1972)], printed to 1 ms: tolerance 0.5 ms.
+	it('reproduce the worked Jakeman-Raynes table to 0.5 ms', () => {
+		// Values derived from τ_off = γ1d²/(Kπ²), τ_on = τ_off/((V/V_th)² − 1) [Jakeman & Raynes,
+		// Phys. Lett. A 39:69 (1972)], printed to 1 ms: tolerance 0.5 ms.
 		const table: [string, number, number, number, number, number, number][] = [
 			['E7-like 5 µm', 0.2, 5, 12.1, 42, 14, 5],
 			['E7-like 7 µm', 0.2, 7, 12.1, 82, 27, 10],
@@ -51,7 +51,7 @@ describe('Jakeman-Raynes response times', () => {
 		}
 		expectReference({
 			label: 'τ (director)',
-			source: 'physics notes §5 worked table [D] from Jakeman & Raynes (1972)',
+			source: 'values derived from τ_off = γ1·d²/(K·π²) (Jakeman & Raynes 1972)',
 			unit: 'ms',
 			tolerance: 0.5,
 			rows

@@ -94,8 +94,8 @@ describe('temperature model', () => {
 		expect(() => materialAt({ material, temperature_C: Number.NaN })).toThrow(/temperature_C/);
 	});
 
-	it('γ1 Arrhenius ratios match the physics notes §5 table', () => {
-		// Physics notes §5 [D]: γ1(T)/γ1(25 °C) = exp[(E_a/k_B)(1/T − 1/T_ref)], printed to 2-3
+	it('γ1 Arrhenius ratios match the worked table', () => {
+		// Values derived from γ1(T)/γ1(25 °C) = exp[(E_a/k_B)(1/T − 1/T_ref)], printed to 2-3
 		// significant digits; tolerance is half a unit in the last printed digit.
 		const table: [number, number, number, number][] = [
 			[0.3, -20, 8.0, 0.05],
@@ -125,7 +125,7 @@ describe('temperature model', () => {
 		}
 		expectReference({
 			label: 'γ1 Arrhenius ratio',
-			source: 'physics notes §5 [D], rounded table',
+			source: 'values derived from the Arrhenius law γ1 ∝ exp(E_a/(k_B·T)), rounded table',
 			unit: '(ratio)',
 			tolerance: 0.05,
 			rows
@@ -147,9 +147,10 @@ describe('temperature model', () => {
 		expect(state.gamma1_Pas / expected).toBeCloseTo(1, 12);
 	});
 
-	it('V_th temperature coefficient matches −β/(2(T_NI − T)) (physics notes §5 [D])', () => {
-		// V_th ∝ sqrt(K/Δε) ∝ S^½ gives d ln V_th/dT = −β/(2(T_NI − T)). At 25 °C, β = 0.2 the
-		// notes print −0.28 %/K (T_NI 60 °C; the formula gives −0.2857, i.e. truncated, not rounded)
+	it('V_th temperature coefficient matches −β/(2(T_NI − T))', () => {
+		// V_th ∝ sqrt(K/Δε) ∝ S^½ with S = (1 − T/T_NI)^β (Haller, Prog. Solid State Chem. 10:103
+		// (1975)) gives d ln V_th/dT = −β/(2(T_NI − T)). At 25 °C, β = 0.2 the worked values are
+		// −0.28 %/K (T_NI 60 °C; the formula gives −0.2857, i.e. truncated, not rounded)
 		// and −0.15 %/K (T_NI 90 °C; −0.1538). Checked against the formula to 1e-4 %/K (central
 		// difference error), and against the printed values to one unit in their last digit.
 		const rows: ReferenceRow[] = [];
@@ -174,7 +175,7 @@ describe('temperature model', () => {
 		}
 		expectReference({
 			label: 'd ln V_th/dT',
-			source: 'physics notes §5 [D], formula −β/(2(T_NI − T))',
+			source: 'derived from V_th ∝ S^½ and S = (1 − T/T_NI)^β (Haller 1975)',
 			unit: '%/K',
 			tolerance: 1e-4,
 			rows
@@ -182,9 +183,9 @@ describe('temperature model', () => {
 	});
 
 	it('follows the measured 5CB birefringence trend away from T_NI (plausibility)', () => {
-		// Δn(589.3 nm) of 5CB from the three-band fits of Wu, Wu, Warenghem & Ismaili, Opt. Eng.
-		// 32:1775 (1993) [physics notes §4.1 D]: 0.1864 (25.1 °C), 0.1703 (29.9), 0.1410 (32.6),
-		// 0.1224 (34.8). The Haller model with T_c = T_NI is compared by ratio to 25.1 °C.
+		// Δn(589.3 nm) of 5CB derived from the three-band fits of Wu, Wu, Warenghem & Ismaili,
+		// Opt. Eng. 32:1775 (1993): 0.1864 (25.1 °C), 0.1703 (29.9), 0.1410 (32.6), 0.1224 (34.8).
+		// The Haller model with T_c = T_NI is compared by ratio to 25.1 °C.
 		// Plausibility tolerance 0.04 in the ratio up to T_NI − 2.5 K; within 0.5 K of T_NI the
 		// model falls too fast (the real transition is first order, S jumps instead of vanishing),
 		// which is asserted as a known limitation.

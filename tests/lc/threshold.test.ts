@@ -9,7 +9,7 @@ import {
 import { materialWith } from './fixtures';
 import { expectReference, type ReferenceRow } from './reference';
 
-/** A nematic state with the §3.3 constants (ε⊥ 5 so Δε is exact). */
+/** A nematic state with the given constants (ε⊥ 5 so Δε is exact). */
 function stateWith(k11_pN: number, k22_pN: number, k33_pN: number, deltaEps: number) {
 	const material = materialWith({
 		k11_pN,
@@ -22,15 +22,16 @@ function stateWith(k11_pN: number, k22_pN: number, k33_pN: number, deltaEps: num
 }
 
 describe('analytic thresholds', () => {
-	// Physics notes §3.3 [D]: K_eff = K11 + (K33 − 2K22)/4 and V = π·sqrt(K/(ε0Δε)), with
-	// formulas from Fréedericksz & Zolina (1933) and Schadt & Helfrich, APL 18:127 (1971).
+	// Values derived from K_eff = K11 + (K33 − 2K22)/4 and V = π·sqrt(K/(ε0Δε)) (Fréedericksz &
+	// Zolina, Trans. Faraday Soc. 29:919 (1933); Schadt & Helfrich, APL 18:127 (1971)), with E7 and
+	// 5CB constants as commonly quoted (from memory).
 	const cases: [string, number, number, number, number, number, number, number][] = [
 		['E7', 11.1, 6.5, 17.1, 13.8, 12.125, 0.99, 0.947],
 		['E7 with K22 5.9', 11.1, 5.9, 17.1, 13.8, 12.425, 1.002, 0.947],
 		['5CB', 6.4, 3.0, 10.0, 11.5, 7.4, 0.847, 0.788]
 	];
 
-	it('reproduces the §3.3 table: V_th,TN and V_c,splay to 0.5 mV, K_eff to 0.5e-3 pN', () => {
+	it('reproduces the derived table: V_th,TN and V_c,splay to 0.5 mV, K_eff to 0.5e-3 pN', () => {
 		const voltages: ReferenceRow[] = [];
 		const elastic: ReferenceRow[] = [];
 		for (const [name, k11, k22, k33, deltaEps, kEff_pN, vth_V, vc_V] of cases) {
@@ -49,14 +50,14 @@ describe('analytic thresholds', () => {
 		}
 		expectReference({
 			label: 'K_eff',
-			source: 'physics notes §3.3 [D]',
+			source: 'derived from K11 + (K33 − 2K22)/4 (Schadt & Helfrich 1971)',
 			unit: 'pN',
 			tolerance: 5e-4,
 			rows: elastic
 		});
 		expectReference({
 			label: 'thresholds',
-			source: 'physics notes §3.3 [D]; Schadt & Helfrich 1971; Fréedericksz & Zolina 1933',
+			source: 'derived from π·sqrt(K/(ε0Δε)) (Schadt & Helfrich 1971; Fréedericksz & Zolina 1933)',
 			unit: 'V',
 			tolerance: 5e-4,
 			rows: voltages

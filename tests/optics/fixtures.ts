@@ -2,8 +2,8 @@
 
 /**
  * Gooch–Tarry leak of a 90° TN between parallel polarizers, polarizer ∥ entrance director:
- * T_NB = sin²((π/2)·sqrt(1 + u²))/(1 + u²), u = 2·d·Δn/λ (Gooch & Tarry, J. Phys. D 8:1575,
- * 1975; physics-notes §2.1). General twist θ: sin²(θ·sqrt(1+u²))/(1+u²), u = π·d·Δn/(θ·λ).
+ * T_NB = sin²((π/2)·sqrt(1 + u²))/(1 + u²), u = 2·d·Δn/λ (Gooch & Tarry, J. Phys. D 8:1575
+ * (1975)). General twist θ: sin²(θ·sqrt(1+u²))/(1+u²), u = π·d·Δn/(θ·λ).
  */
 export function goochTarryLeak(twist_rad: number, u: number): number {
 	const s = Math.sin(twist_rad * Math.sqrt(1 + u * u));

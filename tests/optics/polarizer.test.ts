@@ -20,7 +20,7 @@ import { fixtureIndicesAt, visibleGrid_nm } from './fixtures';
 import { checkAgainstReference } from './reference-check';
 
 const NO_CELL = uniformTwistProfile({ gap_m: 0, twist_rad: 0, nodes: 2 });
-const ALGEBRA = 'standard polarizer algebra, physics-notes §2.5/§7';
+const ALGEBRA = 'standard polarizer algebra (Jones calculus, Jones, JOSA 31:488 (1941))';
 
 function idealPair(rearAxis_deg: number): Float64Array {
 	return singlePassTransmittance({
@@ -127,7 +127,7 @@ describe('polarizers', () => {
 		// tolerance: half a unit of the last printed digit (5e-4 for 0.430/0.370, 5e-6 for 4.3e-4)
 		checkAgainstReference({
 			label: 'T_s, T_p',
-			source: 'physics-notes §7 worked values [D]',
+			source: 'values derived from T_s = (k1 + k2)/2, T_p = (k1² + k2²)/2',
 			actual: actual.slice(0, 2),
 			expected: [0.43, 0.37],
 			tolerance: 5e-4,
@@ -135,7 +135,7 @@ describe('polarizers', () => {
 		});
 		checkAgainstReference({
 			label: 'T_c',
-			source: 'physics-notes §7 worked values [D]',
+			source: 'value derived from T_c = k1·k2',
 			actual: actual.slice(2),
 			expected: [4.3e-4],
 			tolerance: 5e-6,
@@ -158,7 +158,7 @@ describe('polarizers', () => {
 			minPe = Math.min(minPe, polarizingEfficiency(pair));
 		});
 		console.log(
-			`[typical values, physics-notes §7] T_s ∈ [${minTs.toFixed(4)}, ${maxTs.toFixed(4)}], min PE ${minPe.toFixed(5)}`
+			`[typical values, common practice] T_s ∈ [${minTs.toFixed(4)}, ${maxTs.toFixed(4)}], min PE ${minPe.toFixed(5)}`
 		);
 		expect(minTs).toBeGreaterThanOrEqual(0.42);
 		expect(maxTs).toBeLessThanOrEqual(0.44);

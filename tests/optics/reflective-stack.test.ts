@@ -42,8 +42,8 @@ const HOMEOTROPIC_ON = uniformTwistProfile({
 	tilt_rad: QUARTER_TURN_rad
 });
 
-/** physics-notes §2.5 item 3 [D]: R ≈ (k1/2)·(k1·T_NW)·ρ·k1·[(1−δ)+δ/2]·(k1·T_NW). */
-function notesBrightReflectance({
+/** Derived by Jones calculus (Jones 1941): R ≈ (k1/2)·(k1·T_NW)·ρ·k1·[(1−δ)+δ/2]·(k1·T_NW). */
+function derivedBrightReflectance({
 	k1,
 	rho,
 	delta
@@ -75,7 +75,7 @@ function positiveStack(options: {
 }
 
 describe('reflective stack', () => {
-	it('physics-notes §2.5: positive mode, 0 V, k1 = 0.88, ideal guiding, ρ = 0.8, δ = 0 → ≈ 0.24', () => {
+	it('bright state: positive mode, 0 V, k1 = 0.88, ideal guiding, ρ = 0.8, δ = 0 → ≈ 0.24', () => {
 		const stack = positiveStack({ k1: 0.88, rho: 0.8, delta: 0, rs: 0 });
 		const r = stackReflectance({
 			profile: GUIDING_OFF,
@@ -86,23 +86,23 @@ describe('reflective stack', () => {
 		// "≈ 0.24" is printed to 2 decimals: tolerance half a unit, 0.005
 		checkAgainstReference({
 			label: 'bright reflectance, R_s = 0',
-			source: 'physics-notes §2.5 [D], "≈ 0.24"',
+			source: 'derived from R ≈ (k1/2)·k1·ρ·k1·k1 (Jones calculus), "≈ 0.24"',
 			actual: r,
 			expected: [0.24],
 			tolerance: 5e-3,
 			unit: 'reflectance (0…1)'
 		});
 		checkAgainstReference({
-			label: 'bright reflectance vs §2.5 formula',
-			source: 'physics-notes §2.5 item 3 [D]',
+			label: 'bright reflectance vs derived formula',
+			source: 'derived by Jones calculus (Jones, JOSA 31:488 (1941))',
 			actual: r,
-			expected: [notesBrightReflectance({ k1: 0.88, rho: 0.8, delta: 0 })],
+			expected: [derivedBrightReflectance({ k1: 0.88, rho: 0.8, delta: 0 })],
 			tolerance: 1e-12,
 			unit: 'reflectance (0…1)'
 		});
 	});
 
-	it('depolarised fraction δ and first surface follow §2.5: R = R_s + (1 − R_s)²·R_inner', () => {
+	it('depolarised fraction δ and first surface follow R = R_s + (1 − R_s)²·R_inner', () => {
 		const actual: number[] = [];
 		const expected: number[] = [];
 		for (const delta of [0, 0.3, 0.5, 1]) {
@@ -116,12 +116,14 @@ describe('reflective stack', () => {
 						stack
 					})[0]
 				);
-				expected.push(rs + (1 - rs) ** 2 * notesBrightReflectance({ k1: 0.86, rho: 0.85, delta }));
+				expected.push(
+					rs + (1 - rs) ** 2 * derivedBrightReflectance({ k1: 0.86, rho: 0.85, delta })
+				);
 			}
 		}
 		checkAgainstReference({
 			label: 'bright reflectance over δ, R_s',
-			source: 'physics-notes §2.5 items 3 and 5 [D]',
+			source: 'derived by Jones calculus, first surface added incoherently',
 			actual,
 			expected,
 			tolerance: 1e-12,
@@ -132,7 +134,7 @@ describe('reflective stack', () => {
 	it('default first surface is Fresnel for n = 1.5: 0.0400', () => {
 		checkAgainstReference({
 			label: 'R_s',
-			source: 'Fresnel, physics-notes §7 [D]',
+			source: 'Fresnel equations at normal incidence',
 			actual: [
 				FRONT_SURFACE_REFLECTANCE_DEFAULT,
 				fresnelNormalReflectance(1.52),

@@ -85,7 +85,7 @@ describe('sliced director profile', () => {
 	});
 
 	it("'retarder' slabs, 4000 slabs: T_NB equals Gooch–Tarry to 1e-6", () => {
-		// Midpoint retarder slabs carry an O(Δz²) error; physics-notes §2.3 quotes 1e-5 at 4000
+		// Midpoint retarder slabs carry an O(Δz²) error; a rough estimate gives 1e-5 at 4000
 		// slabs, we measure ≈ 1e-7 and hold 1e-6.
 		const actual = someU.map((u) =>
 			leakOfProfile(
@@ -157,7 +157,7 @@ describe('sliced director profile', () => {
 			wavelength_nm: WAVELENGTH_nm,
 			slabModel: 'retarder'
 		});
-		// physics-notes §2.3: 100–400 slabs give ≈ 1e-4 on smooth profiles
+		// Derived convergence estimate: 100–400 slabs give ≈ 1e-4 on smooth profiles
 		checkAgainstReference({
 			label: "'twisted', 400 slabs vs 4000",
 			source: 'self-convergence',

@@ -91,7 +91,7 @@ describe('closed-form twisted layer (90° TN, ideal polarizers)', () => {
 		});
 	});
 
-	it('matches the T_NB table of physics-notes §2.1 [D]', () => {
+	it('matches the T_NB table derived from Gooch & Tarry (1975)', () => {
 		const dDnOverLambda = [0.25, 0.5, 0.75, 0.866, 1.0, 1.2, 1.25, 1.5];
 		const tableT = [0.77281, 0.31656, 0.0286, 0, 0.02626, 0.09682, 0.10819, 0.09364];
 		const m = createMatrix();
@@ -107,7 +107,7 @@ describe('closed-form twisted layer (90° TN, ideal polarizers)', () => {
 		// tolerance 1e-5: the table is printed to 5 decimals (half a unit is 5e-6)
 		checkAgainstReference({
 			label: 'T_NB table',
-			source: 'physics-notes §2.1 [D], after Gooch & Tarry 1975',
+			source: 'values derived from T_NB = sin²((π/2)·sqrt(1+u²))/(1+u²) (Gooch & Tarry 1975)',
 			actual,
 			expected: tableT,
 			tolerance: 1e-5,

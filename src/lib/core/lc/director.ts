@@ -2,7 +2,8 @@
  * Director statics of a twisted-nematic cell at an RMS voltage: public entry points.
  *
  * Model: minimum of G = F_el − ½CV² under the constant-voltage condition (directorKernel.ts),
- * strong anchoring, any twist (tested 0-270°), pretilt, chiral dose d/p [physics notes §3].
+ * strong anchoring, any twist (tested 0-270°), pretilt, chiral dose d/p [Frank, Discuss. Faraday
+ * Soc. 25:19 (1958); Deuling, Mol. Cryst. Liq. Cryst. 19:123 (1972)].
  * Numerics: damped Newton with a block-tridiagonal Hessian (directorNewton.ts). Without a warm
  * start the voltage is continued from 0 V through a ladder scaled by the analytic threshold, so
  * the state reached is the one connected to the field-free state (relevant where high twists are

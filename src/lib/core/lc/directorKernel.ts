@@ -2,9 +2,9 @@
  * Discrete free energy of a twisted-nematic director across the gap, with its exact gradient
  * and Hessian, for the Newton solver.
  *
- * Model [physics notes §3.1-3.2; Frank, Discuss. Faraday Soc. 25:19 (1958); Deuling, Mol. Cryst.
- * Liq. Cryst. 19:123 (1972)]: n = (cosθ cosφ, cosθ sinφ, sinθ), θ tilt from the substrate,
- * φ azimuth. Energy per unit area at fixed RMS voltage V (constant-voltage condition, D_z uniform):
+ * Model [Frank, Discuss. Faraday Soc. 25:19 (1958); Deuling, Mol. Cryst. Liq. Cryst. 19:123
+ * (1972)]: n = (cosθ cosφ, cosθ sinφ, sinθ), θ tilt from the substrate, φ azimuth. Energy
+ * per unit area at fixed RMS voltage V (constant-voltage condition, D_z uniform):
  *   G = ∫ [½(K11cos²θ + K33sin²θ)θ′² + ½(K22cos²θ + K33sin²θ)cos²θ φ′² − K22q0cos²θ φ′] dz − ½CV²,
  *   C = ε0/∫dz/ε_zz, ε_zz = ε⊥ + Δε sin²θ.
  * Discretisation: N equal slabs between N+1 nodes; each slab uses the midpoint tilt and the

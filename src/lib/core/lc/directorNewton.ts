@@ -1,10 +1,10 @@
 /**
  * Damped Newton minimisation of the discrete director energy (directorKernel.ts).
  *
- * Method [physics notes §3.4]: Newton on the discretised Euler-Lagrange equations with the exact
- * Hessian B − Q·g gᵀ: B block-tridiagonal (2×2 blocks, blockTridiagonal.ts), the rank-one
- * capacitance coupling applied by Sherman-Morrison. When the Hessian is not positive definite
- * (a saddle such as the untilted state above threshold) the diagonal is shifted
+ * Method [standard numerics, from memory]: Newton on the discretised Euler-Lagrange equations
+ * with the exact Hessian B − Q·g gᵀ: B block-tridiagonal (2×2 blocks, blockTridiagonal.ts), the
+ * rank-one capacitance coupling applied by Sherman-Morrison. When the Hessian is not positive
+ * definite (a saddle such as the untilted state above threshold) the diagonal is shifted
  * (Levenberg-Marquardt) until it is, which keeps every step a descent direction; steps are capped
  * and accepted by an Armijo backtracking line search on G. A state stuck on a saddle with zero
  * gradient (zero pretilt, untilted) is nudged by a small sin(πz/d) tilt of the pretilt's sign.

@@ -2,8 +2,9 @@
  * Loading a cell, a voltage and a starting profile into a director workspace, and reading a
  * solution out of it (SI at this edge, dimensionless inside the kernel).
  *
- * Initial guess (physics notes §3.4): tilt = pretilt + a small sin(πz/d) perturbation of the
- * pretilt's sign (never the symmetric untilted state), twist linear from 0 to the total twist.
+ * Initial guess (standard continuation practice, from memory): tilt = pretilt + a small sin(πz/d)
+ * perturbation of the pretilt's sign (never the symmetric untilted state), twist linear from 0 to
+ * the total twist.
  * Warm starts are resampled to the workspace's nodes and get the cell's boundary values.
  */
 import type { DirectorCell } from './cell';

@@ -1,8 +1,8 @@
 /**
  * Director response times of a twisted-nematic cell, and their temperature dependence.
  *
- * Model [Jakeman & Raynes, Phys. Lett. A 39:69 (1972); physics notes §5], small-signal director
- * relaxation without backflow:
+ * Model [Jakeman & Raynes, Phys. Lett. A 39:69 (1972)], small-signal director relaxation without
+ * backflow:
  *   τ_off = γ1·d²/(K·π²),  τ_on = γ1·d²/(ε0Δε·V² − K·π²) = τ_off/((V/V_th)² − 1),
  * with K the twist-weighted elastic constant of threshold.ts (K11 + (K33 − 2K22)/4 at 90°, no
  * dopant), so V_th = π·sqrt(K/(ε0Δε)) is consistent. These are director time constants; optical

@@ -7,9 +7,9 @@
  *   [Fréedericksz & Zolina, Trans. Faraday Soc. 29:919 (1933)].
  * - Twisted cell, total twist Φ, chiral dose d/p:
  *   V_th = π·sqrt(K_eff/(ε0Δε)), K_eff = K11 + (K33 − 2K22)(Φ/π)² + 4K22(d/p)(Φ/π)
- *   [Schadt & Helfrich, APL 18:127 (1971); Leslie 1970; general twist from the quadratic
- *   expansion of the Frank energy of physics notes §3.1]. Φ = 90°, d/p = 0 gives the classic
- *   K11 + (K33 − 2K22)/4.
+ *   [Schadt & Helfrich, APL 18:127 (1971); Leslie 1970; general twist derived from the
+ *   quadratic expansion of the Frank energy (Frank, Discuss. Faraday Soc. 25:19 (1958))].
+ *   Φ = 90°, d/p = 0 gives the classic K11 + (K33 − 2K22)/4.
  * Sign convention: Φ > 0 means the azimuth increases from the entrance (z = 0) to the exit plate;
  * d/p > 0 is a dopant whose natural twist has that same sense. Opposite signs lower K_eff.
  */

@@ -1,8 +1,8 @@
 /**
  * Effective extraordinary index seen at normal incidence by light polarised in the plane that
  * contains the director, for a director tilted by θ out of the substrate plane (index
- * ellipsoid; standard, physics-notes §2.3 [M]; e.g. Yeh & Gu, Optics of Liquid Crystal
- * Displays, ch. on uniaxial media — from memory):
+ * ellipsoid; standard, e.g. Yeh & Gu, Optics of Liquid Crystal Displays, ch. on uniaxial
+ * media — from memory):
  *   n_eff(θ) = n_e·n_o / sqrt(n_o²·cos²θ + n_e²·sin²θ)
  * θ = 0 (director in the plane) gives n_e; θ = π/2 (homeotropic) gives n_o.
  */

@@ -4,7 +4,7 @@
  *
  * The iodine-PVA-like model carries TYPICAL VALUES, not a product's data [common practice:
  * display-grade iodine-PVA sheet, single transmittance T_s ≈ 42–44 %, polarizing efficiency
- * ≥ 99.9 % — physics-notes §7]:
+ * ≥ 99.9 % (display grade, from memory)]:
  *   x = (λ − 550 nm)/200 nm,  k1(λ) = k1_550 − 0.04·x²,  k2(λ) = k2_550·(1 + 2x²),
  * with k1_550 = 0.87 and k2_550 = 1e-4: T_s = 0.435 at 550 nm, 0.424 at 400 and 700 nm;
  * PE ≥ 99.9 % from 380 to 780 nm. The mild parabolic fall-off of k1 and rise of k2 toward the

@@ -5,8 +5,8 @@
  * complex2x2.ts). The matrix is real and symmetric, so it is its own transpose and the backward
  * pass sees the same polarizer.
  *
- * Pair algebra for unpolarised light (standard polarizer algebra, physics-notes §2.5 [M];
- * re-derived from the Jones matrices in tests/optics/polarizer.test.ts):
+ * Pair algebra for unpolarised light (standard polarizer algebra, from memory; re-derived from
+ * the Jones matrices in tests/optics/polarizer.test.ts):
  *   single T_s = (k1 + k2)/2, parallel pair T_p = (k1² + k2²)/2, crossed pair T_c = k1·k2,
  *   polarizing efficiency PE = (k1 − k2)/(k1 + k2).
  */

@@ -1,6 +1,6 @@
 /**
  * Jones matrix of a sliced director profile at normal incidence (Jones 1941; slab method as in
- * Yeh & Gu, Optics of Liquid Crystal Displays, TN chapter — from memory; physics-notes §2.3).
+ * Yeh & Gu, Optics of Liquid Crystal Displays, TN chapter — from memory).
  * Per slab k: half-retardation Γ_k/2 = π·(n_eff(θ_k) − n_o)·Δz/λ, n_eff from
  * effective-index.ts. Two slab models:
  * - 'retarder': a uniform slab with its director at the midpoint azimuth φ_k,
@@ -11,7 +11,7 @@
  *   twisted-layer.ts; the inner rotations cancel, so M = R(−φ_exit)·A_{N−1}···A_0 (lab x = the
  *   entrance director). Exact for a uniformly twisted, uniformly tilted layer with any count.
  * With R(ψ) = [[cos ψ, sin ψ], [−sin ψ, cos ψ]] the director of slab k lies along
- * (cos φ_k, sin φ_k); physics-notes §2.3 writes R(φ_k)·diag·R(−φ_k), which with this R places the
+ * (cos φ_k, sin φ_k); some texts write R(φ_k)·diag·R(−φ_k), which with this R places the
  * director at −φ_k — the texts differ in twist handedness; ours matches the closed form.
  * Time dependence e^{+iωt}; the common phase is dropped. No allocation.
  */

@@ -8,7 +8,7 @@
  * - brushedMetal: silver-like, high ρ, partly polarisation-preserving.
  * - transflective: a diffuse element that reflects ρ and transmits t (ρ + t ≤ 1, the rest
  *   absorbed); the transmitted share is reported for a later backlight mode.
- * Defaults are TYPICAL VALUES [common practice, physics-notes §2.5 and §7], not product data.
+ * Defaults are TYPICAL VALUES [common practice], not product data.
  */
 
 import {
@@ -28,7 +28,7 @@ export type ReflectorSpec =
 			depolarizedFraction?: number;
 	  };
 
-export const DIFFUSE_WHITE_REFLECTANCE = 0.8; // typical value, physics-notes §2.5 (ρ ≈ 0.8)
+export const DIFFUSE_WHITE_REFLECTANCE = 0.8; // typical value [common practice] (ρ ≈ 0.8)
 export const BRUSHED_METAL_REFLECTANCE = 0.9; // typical value for a silver-like brushed foil
 export const BRUSHED_METAL_DEPOLARIZED_FRACTION = 0.3; // typical value
 export const TRANSFLECTIVE_REFLECTANCE = 0.7; // typical 70/30 split

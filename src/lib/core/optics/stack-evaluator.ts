@@ -3,9 +3,9 @@
  * director profile precomputed per wavelength; evaluate() allocates nothing in its wavelength
  * loop, and no arrays per call when `out` is supplied and the slab count is unchanged.
  *
- * Model (Jones 1941; physics-notes §2.5, derived here): with P_f, P_r the polarizer matrices
- * and J the cell, the forward matrix is A = P_r·J·P_f; the backward one, in lab axes, is Aᵀ
- * (reciprocity.ts). For unpolarised light of unit intensity behind the first surface:
+ * Model (derived here by Jones calculus, Jones, JOSA 31:488 (1941)): with P_f, P_r the polarizer
+ * matrices and J the cell, the forward matrix is A = P_r·J·P_f; the backward one, in lab axes,
+ * is Aᵀ (reciprocity.ts). For unpolarised light of unit intensity behind the first surface:
  *   reaching the reflector      I_r   = ½‖A‖²                      (‖·‖ Frobenius)
  *   polarisation-kept return    R_pol = ½‖Aᵀ·A‖²                   (mirror = I)
  *   depolarised return          R_dep = I_r · ½‖Aᵀ‖² = I_r²

@@ -1,7 +1,7 @@
 /**
  * Closed-form Jones matrix of a uniformly twisted, untilted uniaxial layer at normal incidence
  * (Yeh & Gu, Optics of Liquid Crystal Displays, TN chapter — from memory; equivalent to Gooch &
- * Tarry, J. Phys. D 8:1575, 1975; physics-notes §2.3):
+ * Tarry, J. Phys. D 8:1575 (1975)):
  *   M = R(−Φ)·A,  A = [[cos X − i(Γ/2)·sinX/X,  Φ·sinX/X],
  *                      [−Φ·sinX/X,             cos X + i(Γ/2)·sinX/X]],
  *   Γ = 2π·Δn·d/λ,  X = sqrt(Φ² + (Γ/2)²).
