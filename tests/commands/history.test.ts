@@ -149,3 +149,20 @@ describe('History', () => {
 		);
 	});
 });
+
+describe('history listeners', () => {
+	it('see the stacks already updated when they are called', () => {
+		const design = demoDesign();
+		const history = new History(design);
+		const seen: [boolean, boolean][] = [];
+		history.subscribe(() => seen.push([history.canUndo, history.canRedo]));
+		history.apply(moveElectrodes(design, { ids: [design.electrodes[0].id], dx_mm: 1, dy_mm: 0 }));
+		history.undo();
+		history.redo();
+		expect(seen).toEqual([
+			[true, false],
+			[false, true],
+			[true, false]
+		]);
+	});
+});

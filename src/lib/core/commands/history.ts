@@ -56,33 +56,36 @@ export class History {
 		return () => this.listeners.delete(listener);
 	}
 
-	private setDesign(design: Design): void {
-		this.current = design;
-		for (const listener of this.listeners) listener(design);
+	/** Tells listeners once the design and both stacks are up to date. */
+	private notify(): void {
+		for (const listener of this.listeners) listener(this.current);
 	}
 
 	/** Applies a patch as a new undo step. Returns false (and records nothing) for a no-op. */
 	apply(patch: Patch, label = ''): boolean {
 		if (isNoopPatch(patch)) return false;
-		this.setDesign(applyPatch(this.current, patch));
+		this.current = applyPatch(this.current, patch);
 		this.undoStack.push({ patch, label });
 		this.redoStack = [];
+		this.notify();
 		return true;
 	}
 
 	undo(): boolean {
 		const step = this.undoStack.pop();
 		if (!step) return false;
-		this.setDesign(applyPatch(this.current, invertPatch(step.patch)));
+		this.current = applyPatch(this.current, invertPatch(step.patch));
 		this.redoStack.push(step);
+		this.notify();
 		return true;
 	}
 
 	redo(): boolean {
 		const step = this.redoStack.pop();
 		if (!step) return false;
-		this.setDesign(applyPatch(this.current, step.patch));
+		this.current = applyPatch(this.current, step.patch);
 		this.undoStack.push(step);
+		this.notify();
 		return true;
 	}
 
@@ -103,7 +106,8 @@ export class History {
 		const dropped = this.undoStack.splice(mark.depth);
 		if (dropped.length === 0) return;
 		const revert = invertPatch(squashPatches(dropped.map((s) => s.patch)));
-		this.setDesign(applyPatch(this.current, revert));
+		this.current = applyPatch(this.current, revert);
+		this.notify();
 	}
 
 	/** Merges every step after the mark into one undo step (nothing when they cancel out). */
@@ -113,12 +117,14 @@ export class History {
 		if (steps.length === 0) return;
 		const patch = squashPatches(steps.map((s) => s.patch));
 		if (!isNoopPatch(patch)) this.undoStack.push({ patch, label: label ?? steps[0].label });
+		this.notify();
 	}
 
 	/** Starts over with another document (open, new): both stacks are cleared. */
 	reset(design: Design): void {
 		this.undoStack = [];
 		this.redoStack = [];
-		this.setDesign(design);
+		this.current = design;
+		this.notify();
 	}
 }
