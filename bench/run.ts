@@ -130,3 +130,19 @@ for (const r of rows) {
 	);
 }
 console.log('ratio = median / target; below 1 meets the target.');
+
+// Memory: heap held by a full design analysis (three cell models, curves, report), as the
+// difference of heap use around it after garbage collection where the runtime allows it.
+const gc = (globalThis as { gc?: () => void }).gc;
+const { analyzeCell } = await import('../src/lib/core/cell/analyze-cell');
+analyzeCell(demo);
+gc?.();
+const before_MB = process.memoryUsage().heapUsed / 2 ** 20;
+const kept = analyzeCell(demo);
+gc?.();
+const after_MB = process.memoryUsage().heapUsed / 2 ** 20;
+console.log(
+	`\nheap held by one cell report of the demo: ${((after_MB - before_MB) * 1024).toFixed(0)} kB ` +
+		`(${kept.curves.length} curves; total heap ${after_MB.toFixed(1)} MB, RSS ${(process.memoryUsage().rss / 2 ** 20).toFixed(0)} MB` +
+		`${gc ? '' : '; run with node --expose-gc for a settled figure'})`
+);
