@@ -42,3 +42,21 @@ test('the drive check follows the cell model over temperature', async ({ page })
 	});
 	await expect(page.getByTestId('drive-verdict')).toContainText('little room');
 });
+
+test('a fluid that clears inside the operating range fails clearly, and undo restores it', async ({
+	page
+}) => {
+	await openApp(page);
+	await page.getByTestId('view-cell').click();
+	await expect(page.getByTestId('cell-results')).toBeVisible({ timeout: 20_000 });
+	await page.getByTestId('fluid-select').selectOption('cyanobiphenyl-single');
+	await expect(page.getByTestId('cell-verdict')).toContainText(
+		'below the hottest operating temperature 40 °C',
+		{ timeout: 20_000 }
+	);
+	await expect(page.getByTestId('overall')).toHaveText('Fails checks');
+	await page.keyboard.press('Control+z');
+	await expect(page.getByTestId('fluid-select')).toHaveValue('generic-reflective-tn');
+	await expect(page.getByTestId('cell-results')).toBeVisible({ timeout: 20_000 });
+	await expect(page.getByTestId('overall')).not.toHaveText('Fails checks');
+});
