@@ -1,8 +1,7 @@
 /** Terminal text for a drive report, shared by `drive` and `check`. */
+import { findingLines } from './finding-text';
 import type { DriveReport } from '../lib/core/drive/analyze-drive';
 import { fixed, formatTable } from './table';
-
-const MARK = { pass: 'ok  ', warn: 'warn', fail: 'FAIL' } as const;
 
 export function driveReportLines(report: DriveReport, options: { withCell: boolean }): string[] {
 	const duty = report.isStatic ? 'static' : `1/${report.commons}`;
@@ -42,7 +41,6 @@ export function driveReportLines(report: DriveReport, options: { withCell: boole
 			`amplitude window ${fixed(window.window.min_V, 3)}–${fixed(window.window.max_V, 3)} V, best ${fixed(window.best_V, 3)} V`
 		);
 	}
-	for (const finding of report.findings)
-		lines.push(`${MARK[finding.severity]}  ${finding.message}`);
+	for (const finding of report.findings) lines.push(...findingLines(finding));
 	return lines;
 }

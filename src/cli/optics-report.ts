@@ -1,4 +1,5 @@
 /** The optical part of `check`: a compact JSON summary and terminal lines. */
+import { findingLines } from './finding-text';
 import type { DesignReport } from '../lib/core/analyze-design';
 import type { PixelAppearance } from '../lib/core/cell/pixel-appearance';
 import { fixed, formatTable } from './table';
@@ -106,7 +107,6 @@ export function opticsLines(report: DesignReport): string[] {
 		]),
 		`switching voltages for the drive check: ${report.thresholdSource}`
 	];
-	for (const f of cell.findings)
-		lines.push(`${f.severity === 'fail' ? 'FAIL' : 'warn'}  ${f.message}`);
+	for (const f of cell.findings) lines.push(...findingLines(f));
 	return lines;
 }

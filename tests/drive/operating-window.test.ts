@@ -51,7 +51,8 @@ describe('operating window', () => {
 			thresholds: cell({ tempCoeff_mV_per_K: -8 })
 		});
 		expect(r.window.window).toBeNull();
-		expect(r.findings.map((f) => f.message).join(' ')).toMatch(/temperature compensation/);
+		expect(r.findings.map((f) => f.code)).toContain('drive.no-common-amplitude');
+		expect(r.findings.map((f) => f.fix).join(' ')).toMatch(/temperature compensation/);
 	});
 
 	it('names the side that fails when the set amplitude is outside the window', () => {

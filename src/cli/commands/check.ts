@@ -1,4 +1,5 @@
 /** `sunglyph check <design.json>`: validation, wiring and the drive verdict of a design file. */
+import { findingLines } from '../finding-text';
 import { parseArgs } from 'node:util';
 import { parseDesignText } from '../../lib/core/design/parse-design';
 import { formatIssue } from '../../lib/core/design/issues';
@@ -57,8 +58,7 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 		io.out(JSON.stringify({ ...report, optics: opticsSummary(report) }, null, 2) + '\n');
 	} else {
 		const lines = [`${parsed.design.name}`, '', 'Wiring'];
-		for (const f of report.wiring.findings)
-			lines.push(`  ${f.severity === 'fail' ? 'FAIL' : 'ok  '}  ${f.message}`);
+		for (const f of report.wiring.findings) lines.push(...findingLines(f).map((l) => `  ${l}`));
 		lines.push('', 'Drive');
 		lines.push(
 			...driveReportLines(report.drive, { withCell: true })

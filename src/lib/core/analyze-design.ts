@@ -13,7 +13,7 @@ import {
 	type DriveReport,
 	type WiringReport
 } from './drive/analyze-drive';
-import { overallSeverity, type Finding, type Severity } from './drive/drive-verdict';
+import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
 
 export interface DesignReport {
@@ -45,7 +45,15 @@ export function analyzeDesign(
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
-	if (cellError) cellFindings.push({ severity: 'fail', message: cellError });
+	if (cellError)
+		cellFindings.push(
+			finding({
+				code: 'optics.model-failed',
+				severity: 'fail',
+				message: cellError,
+				fix: "Check the cell's fluid, gap and temperature range."
+			})
+		);
 	return {
 		design: {
 			name: design.name,
@@ -87,12 +95,13 @@ function thresholdAgreement(design: Design, cell: CellReport): Finding[] {
 	const off90 = Math.abs(entered.v90 / room.v90_V - 1);
 	if (off10 <= THRESHOLD_AGREEMENT && off90 <= THRESHOLD_AGREEMENT) return [];
 	return [
-		{
+		finding({
+			code: 'optics.thresholds-disagree',
 			severity: 'warn',
 			message:
 				`The entered V10/V90 (${entered.v10.toFixed(2)}/${entered.v90.toFixed(2)} V at ${cell.room_C} °C) differ from ` +
-				`the cell model's ${room.v10_V.toFixed(2)}/${room.v90_V.toFixed(2)} V. Use measured fluid data, or switch the ` +
-				`drive check to the model's values.`
-		}
+				`the cell model's ${room.v10_V.toFixed(2)}/${room.v90_V.toFixed(2)} V.`,
+			fix: "Use measured fluid data, or switch the drive check to the model's values."
+		})
 	];
 }

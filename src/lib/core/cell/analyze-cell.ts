@@ -9,7 +9,7 @@ import { responseVsTemperature } from '../lc/response';
 import { materialAt } from '../lc/temperature';
 import { rmsVoltages } from '../drive/rms-drive';
 import type { ThresholdPoint } from '../drive/threshold-at-temperature';
-import type { Finding } from '../drive/drive-verdict';
+import { finding, type Finding } from '../findings/finding';
 import { createCellOptics } from './cell-optics';
 import { electroOpticCurve, type ElectroOpticCurve } from './electro-optic-curve';
 import { contrastRatio, pixelAppearance, type PixelAppearance } from './pixel-appearance';
@@ -95,12 +95,16 @@ export function analyzeCell(
 	});
 	if (response.tooSlowAt_C.length > 0) {
 		const coldest = Math.min(...response.tooSlowAt_C);
-		findings.push({
-			severity: 'warn',
-			message:
-				`Switching is slower than ${cell.switchingLimit_s} s at and below ${Math.max(...response.tooSlowAt_C)} °C ` +
-				`(coldest checked ${coldest} °C): readings will lag or smear. Consider a lower-viscosity fluid, a thinner gap or a heater.`
-		});
+		findings.push(
+			finding({
+				code: 'optics.slow-switching',
+				severity: 'warn',
+				message:
+					`Switching is slower than ${cell.switchingLimit_s} s at and below ${Math.max(...response.tooSlowAt_C)} °C ` +
+					`(coldest checked ${coldest} °C): readings will lag or smear.`,
+				fix: 'Use a lower-viscosity fluid, a thinner gap or a heater.'
+			})
+		);
 	}
 	const ghostDeltaE00 = deltaE2000(background, off);
 	findings.push(...contrastFindings(contrastRatio(off, on), ghostDeltaE00));
@@ -138,21 +142,33 @@ export const GHOST_VISIBLE_DELTA_E00 = 1;
 function contrastFindings(ratio: number, ghost: number): Finding[] {
 	const findings: Finding[] = [];
 	if (ratio < CONTRAST_MINIMUM) {
-		findings.push({
-			severity: 'fail',
-			message: `On segments reach only ${ratio.toFixed(2)}:1 against off segments (minimum ${CONTRAST_MINIMUM}:1): raise the drive or check the cell's switching voltages.`
-		});
+		findings.push(
+			finding({
+				code: 'optics.contrast-below-minimum',
+				severity: 'fail',
+				message: `On segments reach only ${ratio.toFixed(2)}:1 against off segments (minimum ${CONTRAST_MINIMUM}:1).`,
+				fix: "Raise the drive or check the cell's switching voltages."
+			})
+		);
 	} else if (ratio < CONTRAST_RECOMMENDED) {
-		findings.push({
-			severity: 'warn',
-			message: `Contrast ${ratio.toFixed(2)}:1 is legible but below the ${CONTRAST_RECOMMENDED}:1 usually recommended; an anti-reflection front or a stronger drive helps.`
-		});
+		findings.push(
+			finding({
+				code: 'optics.contrast-below-recommended',
+				severity: 'warn',
+				message: `Contrast ${ratio.toFixed(2)}:1 is legible but below the ${CONTRAST_RECOMMENDED}:1 usually recommended.`,
+				fix: 'An anti-reflection front or a stronger drive helps.'
+			})
+		);
 	}
 	if (ghost > GHOST_VISIBLE_DELTA_E00) {
-		findings.push({
-			severity: 'warn',
-			message: `Off segments differ from the background by ΔE00 ${ghost.toFixed(1)}: they may show as ghosts.`
-		});
+		findings.push(
+			finding({
+				code: 'optics.ghost-visible',
+				severity: 'warn',
+				message: `Off segments differ from the background by ΔE00 ${ghost.toFixed(1)}: they may show as ghosts.`,
+				fix: 'Lower the drive amplitude, use a steeper fluid, or fewer commons.'
+			})
+		);
 	}
 	return findings;
 }

@@ -12,7 +12,8 @@ import {
 } from './rms-drive';
 import { operatingWindow, type OperatingWindow } from './operating-window';
 import { thresholdsOverRange, type ThresholdPoint } from './threshold-at-temperature';
-import { windowFindings, overallSeverity, type Finding, type Severity } from './drive-verdict';
+import { windowFindings } from './drive-verdict';
+import { finding, overallSeverity, type Finding, type Severity } from '../findings/finding';
 import { pinMap, type PinMap } from './pin-map';
 
 /** Frame rates outside this range flicker or waste power [common practice: 30–200 Hz]. */
@@ -66,25 +67,37 @@ export function analyzeDrive(options: {
 		const optimum = optimalBiasDivisor(drive.commons);
 		const atOptimum = rmsVoltages({ ...levels, biasDivisor: optimum }).selectionRatio;
 		if (rms.selectionRatio < atOptimum * 0.99) {
-			findings.push({
-				severity: 'warn',
-				message:
-					`Bias 1/${Number(drive.biasDivisor.toFixed(3))} gives a selection ratio of ` +
-					`${rms.selectionRatio.toFixed(3)}; 1/${optimum.toFixed(2)} would give ${atOptimum.toFixed(3)} ` +
-					`(the Alt–Pleshko limit for ${drive.commons} commons).`
-			});
+			findings.push(
+				finding({
+					code: 'drive.bias-off-optimum',
+					severity: 'warn',
+					message:
+						`Bias 1/${Number(drive.biasDivisor.toFixed(3))} gives a selection ratio of ` +
+						`${rms.selectionRatio.toFixed(3)}; 1/${optimum.toFixed(2)} would give ${atOptimum.toFixed(3)} ` +
+						`(the Alt–Pleshko limit for ${drive.commons} commons).`,
+					fix: `Choose the bias nearest 1/${optimum.toFixed(2)} that the LCD driver offers.`
+				})
+			);
 		}
 	}
 	if (drive.frameRate_Hz < FRAME_RATE_RANGE_HZ.min) {
-		findings.push({
-			severity: 'warn',
-			message: `A frame rate of ${drive.frameRate_Hz} Hz may flicker; segment glass is usually driven at ${FRAME_RATE_RANGE_HZ.min}–${FRAME_RATE_RANGE_HZ.max} Hz.`
-		});
+		findings.push(
+			finding({
+				code: 'drive.frame-rate-low',
+				severity: 'warn',
+				message: `A frame rate of ${drive.frameRate_Hz} Hz may flicker; segment glass is usually driven at ${FRAME_RATE_RANGE_HZ.min}–${FRAME_RATE_RANGE_HZ.max} Hz.`,
+				fix: `Raise the frame rate to at least ${FRAME_RATE_RANGE_HZ.min} Hz.`
+			})
+		);
 	} else if (drive.frameRate_Hz > FRAME_RATE_RANGE_HZ.max) {
-		findings.push({
-			severity: 'warn',
-			message: `A frame rate of ${drive.frameRate_Hz} Hz raises drive current for no gain; segment glass is usually driven at ${FRAME_RATE_RANGE_HZ.min}–${FRAME_RATE_RANGE_HZ.max} Hz.`
-		});
+		findings.push(
+			finding({
+				code: 'drive.frame-rate-high',
+				severity: 'warn',
+				message: `A frame rate of ${drive.frameRate_Hz} Hz raises drive current for no gain; segment glass is usually driven at ${FRAME_RATE_RANGE_HZ.min}–${FRAME_RATE_RANGE_HZ.max} Hz.`,
+				fix: `Lower the frame rate to at most ${FRAME_RATE_RANGE_HZ.max} Hz.`
+			})
+		);
 	}
 	return {
 		commons: drive.commons,
@@ -114,28 +127,45 @@ export function analyzeWiring(design: Design): WiringReport {
 	const pins = pinMap(design);
 	const findings: Finding[] = [];
 	for (const conflict of pins.conflicts) {
-		findings.push({
-			severity: 'fail',
-			message: `${conflict.electrodes.join(', ')} share common ${conflict.common} and line ${conflict.line}; they would always switch together.`
-		});
+		findings.push(
+			finding({
+				code: 'wiring.shared-crossing',
+				severity: 'fail',
+				message: `${conflict.electrodes.join(', ')} share common ${conflict.common} and line ${conflict.line}; they would always switch together.`,
+				fix: 'Move all but one of them to a free (common, line) crossing.',
+				electrodes: conflict.electrodes
+			})
+		);
 	}
 	if (pins.unassigned.length > 0) {
-		findings.push({
-			severity: 'fail',
-			message: `Not assigned to a common and a line: ${pins.unassigned.join(', ')}.`
-		});
+		findings.push(
+			finding({
+				code: 'wiring.unassigned',
+				severity: 'fail',
+				message: `Not assigned to a common and a line: ${pins.unassigned.join(', ')}.`,
+				fix: 'Assign each to a common and a segment line, by hand or automatically.',
+				electrodes: pins.unassigned
+			})
+		);
 	}
 	if (pins.commonsBeyondDrive.length > 0) {
-		findings.push({
-			severity: 'fail',
-			message: `The drive scans ${design.drive.commons} common(s), but electrodes sit on ${pins.commonsBeyondDrive.join(', ')}.`
-		});
+		findings.push(
+			finding({
+				code: 'wiring.common-beyond-drive',
+				severity: 'fail',
+				message: `The drive scans ${design.drive.commons} common(s), but electrodes sit on ${pins.commonsBeyondDrive.join(', ')}.`,
+				fix: 'Raise the number of commons the drive scans, or move those electrodes to scanned commons.'
+			})
+		);
 	}
 	if (findings.length === 0) {
-		findings.push({
-			severity: 'pass',
-			message: `${design.electrodes.length} electrodes on ${pins.commonsUsed} common(s) and ${pins.linesUsed} segment line(s): ${pins.pinCount} pins, no conflicts.`
-		});
+		findings.push(
+			finding({
+				code: 'wiring.ok',
+				severity: 'pass',
+				message: `${design.electrodes.length} electrodes on ${pins.commonsUsed} common(s) and ${pins.linesUsed} segment line(s): ${pins.pinCount} pins, no conflicts.`
+			})
+		);
 	}
 	return { pins, findings, severity: overallSeverity(findings) };
 }

@@ -2,13 +2,7 @@
  * Plain-language verdicts on a drive's operating window: what fails, where, and what to change.
  */
 import type { OperatingWindow } from './operating-window';
-
-export type Severity = 'pass' | 'warn' | 'fail';
-
-export interface Finding {
-	severity: Severity;
-	message: string;
-}
+import { finding, type Finding } from '../findings/finding';
 
 const volts = (v: number) => `${v.toFixed(2)} V`;
 const celsius = (t: number) => `${Number(t.toFixed(1))} °C`;
@@ -24,30 +18,45 @@ export function windowFindings(options: {
 }): Finding[] {
 	const { result, amplitude_V, selectionRatio } = options;
 	const checks = result.perTemperature;
-	if (checks.length === 0) return [{ severity: 'fail', message: 'No temperatures to check.' }];
+	if (checks.length === 0)
+		return [
+			finding({
+				code: 'drive.no-temperatures',
+				severity: 'fail',
+				message: 'No temperatures to check.',
+				fix: 'Enter an operating temperature range.'
+			})
+		];
 	const findings: Finding[] = [];
 	const hopeless = checks.filter((c) => c.window === null);
 	for (const check of hopeless) {
-		findings.push({
-			severity: 'fail',
-			message:
-				`No amplitude works at ${celsius(check.temperature_C)}: the cell needs V90/V10 = ` +
-				`${(check.v90_V / check.v10_V).toFixed(3)} but the drive's selection ratio is ` +
-				`${selectionRatio.toFixed(3)}, so off segments ghost whenever on segments reach full ` +
-				`contrast. Use fewer commons, a bias nearer the optimum, or a steeper fluid.`
-		});
+		findings.push(
+			finding({
+				code: 'drive.ratio-too-low',
+				severity: 'fail',
+				message:
+					`No amplitude works at ${celsius(check.temperature_C)}: the cell needs V90/V10 = ` +
+					`${(check.v90_V / check.v10_V).toFixed(3)} but the drive's selection ratio is ` +
+					`${selectionRatio.toFixed(3)}, so off segments ghost whenever on segments reach full ` +
+					`contrast.`,
+				fix: 'Use fewer commons, a bias nearer the optimum, or a steeper fluid.'
+			})
+		);
 	}
 	if (hopeless.length === 0 && result.window === null) {
 		const cold = worst(checks, (c) => -c.v90_V);
 		const hot = worst(checks, (c) => c.v10_V);
-		findings.push({
-			severity: 'fail',
-			message:
-				`No single amplitude covers ${celsius(cold.temperature_C)} to ${celsius(hot.temperature_C)}: ` +
-				`on segments need ${volts(cold.window!.min_V)} at ${celsius(cold.temperature_C)}, but off ` +
-				`segments ghost above ${volts(hot.window!.max_V)} at ${celsius(hot.temperature_C)}. ` +
-				`Add temperature compensation of the drive voltage or narrow the range.`
-		});
+		findings.push(
+			finding({
+				code: 'drive.no-common-amplitude',
+				severity: 'fail',
+				message:
+					`No single amplitude covers ${celsius(cold.temperature_C)} to ${celsius(hot.temperature_C)}: ` +
+					`on segments need ${volts(cold.window!.min_V)} at ${celsius(cold.temperature_C)}, but off ` +
+					`segments ghost above ${volts(hot.window!.max_V)} at ${celsius(hot.temperature_C)}.`,
+				fix: 'Add temperature compensation of the drive voltage or narrow the range.'
+			})
+		);
 	}
 	if (result.window !== null && !result.ok) {
 		const best = result.best_V ?? amplitude_V;
@@ -58,40 +67,48 @@ export function windowFindings(options: {
 		const ghosting = checks.filter((c) => c.offMargin_V < 0);
 		if (weakOn.length > 0) {
 			const c = worst(weakOn, (x) => x.onMargin_V);
-			findings.push({
-				severity: 'fail',
-				message:
-					`${volts(amplitude_V)} is too low: on segments reach ${volts(c.on_V)}, below V90 = ` +
-					`${volts(c.v90_V)} at ${celsius(c.temperature_C)}. Set ${volts(best)} (${range}).`
-			});
+			findings.push(
+				finding({
+					code: 'drive.amplitude-too-low',
+					severity: 'fail',
+					message:
+						`${volts(amplitude_V)} is too low: on segments reach ${volts(c.on_V)}, below V90 = ` +
+						`${volts(c.v90_V)} at ${celsius(c.temperature_C)}.`,
+					fix: `Set ${volts(best)} (${range}).`
+				})
+			);
 		}
 		if (ghosting.length > 0) {
 			const c = worst(ghosting, (x) => x.offMargin_V);
-			findings.push({
-				severity: 'fail',
-				message:
-					`${volts(amplitude_V)} is too high: off segments get ${volts(c.off_V)}, above V10 = ` +
-					`${volts(c.v10_V)} at ${celsius(c.temperature_C)}, and ghost. Set ${volts(best)} (${range}).`
-			});
+			findings.push(
+				finding({
+					code: 'drive.amplitude-too-high',
+					severity: 'fail',
+					message:
+						`${volts(amplitude_V)} is too high: off segments get ${volts(c.off_V)}, above V10 = ` +
+						`${volts(c.v10_V)} at ${celsius(c.temperature_C)}, and ghost.`,
+					fix: `Set ${volts(best)} (${range}).`
+				})
+			);
 		}
 	}
 	if (result.ok) {
 		const tight = result.margin_percent < 5;
 		const span = checks.map((c) => c.temperature_C);
-		findings.push({
-			severity: tight ? 'warn' : 'pass',
-			message:
-				`Every segment switches cleanly from ${celsius(Math.min(...span))} to ` +
-				`${celsius(Math.max(...span))} at ${volts(amplitude_V)}; smallest margin ` +
-				`${volts(result.margin_V)} (${result.margin_percent.toFixed(1)} %)` +
-				(tight ? ', which leaves little room for cell-gap and supply tolerances.' : '.')
-		});
+		findings.push(
+			finding({
+				code: tight ? 'drive.margin-small' : 'drive.window-ok',
+				severity: tight ? 'warn' : 'pass',
+				message:
+					`Every segment switches cleanly from ${celsius(Math.min(...span))} to ` +
+					`${celsius(Math.max(...span))} at ${volts(amplitude_V)}; smallest margin ` +
+					`${volts(result.margin_V)} (${result.margin_percent.toFixed(1)} %)` +
+					(tight ? ', which leaves little room for cell-gap and supply tolerances.' : '.'),
+				fix: tight
+					? 'Use fewer commons, a steeper fluid, or temperature compensation of the drive voltage.'
+					: ''
+			})
+		);
 	}
 	return findings;
-}
-
-export function overallSeverity(findings: readonly Finding[]): Severity {
-	if (findings.some((f) => f.severity === 'fail')) return 'fail';
-	if (findings.some((f) => f.severity === 'warn')) return 'warn';
-	return 'pass';
 }
