@@ -1,6 +1,7 @@
 import { defineConfig } from '@playwright/test';
 
-const PORT = 4319;
+// PW_PORT lets several checkouts run their browser flows side by side.
+const PORT = Number(process.env.PW_PORT ?? 4319);
 
 export default defineConfig({
 	testDir: 'tests/browser',

@@ -12,6 +12,7 @@ import { generateSevenSegment } from '../src/lib/core/glyphs/seven-segment';
 import { generateBarGraph } from '../src/lib/core/glyphs/bar-graph';
 import { serializeDesign } from '../src/lib/core/design/parse-design';
 import { DEFAULT_CELL } from '../src/lib/core/design/cell-schema';
+import { DEFAULT_PINOUT, DEFAULT_RULES } from '../src/lib/core/design/rules-schema';
 
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 const pt = (x: number, y: number, inH?: [number, number], outH?: [number, number]): Point => ({
@@ -41,8 +42,10 @@ const circle = (cx: number, cy: number, r: number): Contour => {
 
 const electrodes: Electrode[] = [];
 const groups: Design['groups'] = [];
-function add(e: Omit<Electrode, 'holes' | 'common' | 'line'> & { holes?: Contour[] }): string {
-	electrodes.push({ holes: [], common: null, line: null, ...e });
+function add(
+	e: Omit<Electrode, 'holes' | 'common' | 'line' | 'locked'> & { holes?: Contour[] }
+): string {
+	electrodes.push({ holes: [], common: null, line: null, locked: false, ...e });
 	return e.id;
 }
 
@@ -262,7 +265,9 @@ const design: Design = {
 	},
 	viewing: { distance_mm: 600 },
 	cell: DEFAULT_CELL,
-	lighting: { illuminant: 'D65', observer: 2, illuminance_lx: 500 }
+	lighting: { illuminant: 'D65', observer: 2, illuminance_lx: 500 },
+	rules: DEFAULT_RULES,
+	pinout: DEFAULT_PINOUT
 };
 
 const target = new URL('../src/lib/core/design/demo-design.json', import.meta.url);

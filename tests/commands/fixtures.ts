@@ -3,6 +3,7 @@
  * group, plus helpers to run commands and read electrodes back.
  */
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-schema';
+import { DEFAULT_PINOUT, DEFAULT_RULES } from '../../src/lib/core/design/rules-schema';
 import {
 	DESIGN_FORMAT,
 	DESIGN_VERSION,
@@ -28,6 +29,7 @@ export function electrode(id: string, outline: Contour, extra: Partial<Electrode
 		holes: [],
 		common: null,
 		line: null,
+		locked: false,
 		...extra
 	};
 }
@@ -63,7 +65,9 @@ export function emptyDesign(): Design {
 		},
 		viewing: { distance_mm: 500 },
 		cell: structuredClone(DEFAULT_CELL),
-		lighting: { ...DEFAULT_LIGHTING }
+		lighting: { ...DEFAULT_LIGHTING },
+		rules: { ...DEFAULT_RULES },
+		pinout: { ...DEFAULT_PINOUT }
 	};
 }
 

@@ -153,6 +153,8 @@ describe('document fields', () => {
 			'glass',
 			'lighting',
 			'name',
+			'pinout',
+			'rules',
 			'thresholds',
 			'viewing'
 		]);

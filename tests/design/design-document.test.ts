@@ -6,10 +6,11 @@ import {
 	serializeDesign
 } from '../../src/lib/core/design/parse-design';
 import { demoDesign } from '../../src/lib/core/design/demo';
-import { migrateDocument } from '../../src/lib/core/design/migrations';
-import type { Design, Electrode } from '../../src/lib/core/design/schema';
+import { DESIGN_MIGRATIONS, migrateDocument } from '../../src/lib/core/design/migrations';
+import { DESIGN_VERSION, type Design, type Electrode } from '../../src/lib/core/design/schema';
 import { analyzeDesign } from '../../src/lib/core/analyze-design';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-schema';
+import { DEFAULT_PINOUT, DEFAULT_RULES } from '../../src/lib/core/design/rules-schema';
 
 // JSON has no negative zero, so −0 and 0 are the same coordinate in a saved design.
 const finite = fc
@@ -53,11 +54,12 @@ const designArb: fc.Arbitrary<Design> = fc
 			outline: e.outline,
 			holes: e.holes,
 			common: e.assigned ? commonRefs[e.c % commons].id : null,
-			line: e.assigned ? lineRefs[e.l % lines].id : null
+			line: e.assigned ? lineRefs[e.l % lines].id : null,
+			locked: e.assigned && e.c % 2 === 0
 		}));
 		return {
 			format: 'sunglyph-design',
-			version: 2,
+			version: 3,
 			name: 'random',
 			glass: {
 				width_mm: 50,
@@ -85,7 +87,9 @@ const designArb: fc.Arbitrary<Design> = fc
 			},
 			viewing: { distance_mm: 500 },
 			cell: { ...DEFAULT_CELL, gap_um: 3 + (commons % 5) },
-			lighting: DEFAULT_LIGHTING
+			lighting: DEFAULT_LIGHTING,
+			rules: { ...DEFAULT_RULES, minGap_mm: 0.01 * (1 + (lines % 5)) },
+			pinout: { ...DEFAULT_PINOUT, order: commons % 2 ? 'commons-last' : 'commons-first' }
 		} satisfies Design;
 	});
 
@@ -164,22 +168,48 @@ describe('design document', () => {
 			ok: false,
 			path: 'format'
 		});
-		expect(migrateDocument({ format: 'sunglyph-design', version: 9 })).toMatchObject({
+		expect(migrateDocument({ format: 'sunglyph-design', version: 99 })).toMatchObject({
 			ok: false,
 			path: 'version'
 		});
 		expect(migrateDocument([])).toMatchObject({ ok: false, path: '(root)' });
 	});
 
-	it('lifts a version-1 file to version 2 with the default cell and light', () => {
-		const v1 = JSON.parse(serializeDesign(demoDesign()));
+	/** A version-2 document: no rules, no pin-out, electrodes without a lock flag. */
+	function asVersion2(design: Design): Record<string, unknown> {
+		const doc = JSON.parse(serializeDesign(design));
+		doc.version = 2;
+		delete doc.rules;
+		delete doc.pinout;
+		for (const e of doc.electrodes) delete e.locked;
+		return doc;
+	}
+
+	it('lifts a version-2 file to version 3 with default rules, pin-out and unlocked assignments', () => {
+		const demo = demoDesign();
+		const step = DESIGN_MIGRATIONS[2](asVersion2(demo));
+		expect(step.rules).toEqual(DEFAULT_RULES);
+		expect(step.pinout).toEqual(DEFAULT_PINOUT);
+		const result = parseDesignValue(asVersion2(demo));
+		expect(result.ok).toBe(true);
+		if (result.ok) {
+			expect(result.design.version).toBe(DESIGN_VERSION);
+			expect(result.design.electrodes.every((e) => e.locked === false)).toBe(true);
+			expect(result.design.electrodes.map((e) => [e.id, e.common, e.line])).toEqual(
+				demo.electrodes.map((e) => [e.id, e.common, e.line])
+			);
+		}
+	});
+
+	it('lifts a version-1 file to the current version with the default cell and light', () => {
+		const v1 = asVersion2(demoDesign());
 		v1.version = 1;
 		delete v1.cell;
 		delete v1.lighting;
 		const result = parseDesignValue(v1);
 		expect(result.ok).toBe(true);
 		if (result.ok) {
-			expect(result.design.version).toBe(2);
+			expect(result.design.version).toBe(DESIGN_VERSION);
 			expect(result.design.cell).toEqual(DEFAULT_CELL);
 			expect(result.design.lighting).toEqual(DEFAULT_LIGHTING);
 			expect(result.design.electrodes).toEqual(demoDesign().electrodes);

@@ -25,7 +25,8 @@ export function square(id: string, x: number, y: number, size = 2): Electrode {
 		],
 		holes: [],
 		common: null,
-		line: null
+		line: null,
+		locked: false
 	};
 }
 

@@ -14,7 +14,16 @@ const el = (
 	id: string,
 	outline: Electrode['outline'],
 	holes: Electrode['holes'] = []
-): Electrode => ({ id, name: id, kind: 'segment', outline, holes, common: null, line: null });
+): Electrode => ({
+	id,
+	name: id,
+	kind: 'segment',
+	outline,
+	holes,
+	common: null,
+	line: null,
+	locked: false
+});
 
 describe('snapPoint', () => {
 	const candidates = {

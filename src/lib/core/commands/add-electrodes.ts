@@ -18,6 +18,7 @@ export interface ElectrodeInput {
 	holes?: readonly Contour[];
 	common?: string | null;
 	line?: string | null;
+	locked?: boolean;
 }
 
 export function addElectrodes(
@@ -43,7 +44,8 @@ export function addElectrodes(
 			outline: input.outline,
 			holes: [...(input.holes ?? [])],
 			common: input.common ?? null,
-			line: input.line ?? null
+			line: input.line ?? null,
+			locked: input.locked ?? false
 		};
 	});
 	return editDesign(design, (draft) => draft.electrodes.insert(records, index));

@@ -28,7 +28,8 @@ export function insertGenerated(
 		outline: part.outline,
 		holes: [...part.holes],
 		common: null,
-		line: null
+		line: null,
+		locked: false
 	}));
 	return editDesign(design, (draft) => {
 		draft.electrodes.insert(electrodes);

@@ -75,7 +75,8 @@ export function regenerateGroup(
 					outline: part.outline,
 					holes: [...part.holes],
 					common: null,
-					line: null
+					line: null,
+					locked: false
 				});
 				members.push(id);
 			}

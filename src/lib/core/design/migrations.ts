@@ -5,6 +5,7 @@
  */
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
+import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -16,6 +17,17 @@ export const DESIGN_MIGRATIONS: MigrationTable = {
 		...doc,
 		cell: doc.cell ?? JSON.parse(JSON.stringify(DEFAULT_CELL)),
 		lighting: doc.lighting ?? { ...DEFAULT_LIGHTING }
+	}),
+	/** Version 3 adds the design-rule limits and the pin-out; assignments start unlocked. */
+	2: (doc) => ({
+		...doc,
+		rules: doc.rules ?? { ...DEFAULT_RULES },
+		pinout: doc.pinout ?? { ...DEFAULT_PINOUT },
+		electrodes: Array.isArray(doc.electrodes)
+			? doc.electrodes.map((e: unknown) =>
+					typeof e === 'object' && e !== null && !Array.isArray(e) ? { locked: false, ...e } : e
+				)
+			: doc.electrodes
 	})
 };
 

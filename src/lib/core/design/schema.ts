@@ -1,5 +1,5 @@
 /**
- * The sunglyph design document, version 2: the schema is the single source of truth and the
+ * The sunglyph design document, version 3: the schema is the single source of truth and the
  * TypeScript types are derived from it.
  *
  * Units: all lengths in millimetres (suffix `_mm`), voltages in volts (`_V`), frequencies in hertz
@@ -12,9 +12,10 @@
  */
 import { z } from 'zod';
 import { cellSchema, lightingSchema } from './cell-schema';
+import { pinoutSchema, rulesSchema } from './rules-schema';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
-export const DESIGN_VERSION = 2;
+export const DESIGN_VERSION = 3;
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
@@ -63,7 +64,9 @@ export const electrodeSchema = z.strictObject({
 	/** Id of the common (back plate) this electrode faces, or null while unassigned. */
 	common: id().nullable(),
 	/** Id of the segment line (front plate pin) driving it, or null while unassigned. */
-	line: id().nullable()
+	line: id().nullable(),
+	/** A locked assignment is kept as it is by automatic assignment. */
+	locked: z.boolean().default(false)
 });
 
 export const generatorParamSchema = z.union([finite(), z.string().max(200), z.boolean()]);
@@ -120,7 +123,9 @@ export const designSchema = z.strictObject({
 	thresholds: thresholdSchema,
 	viewing: viewingSchema,
 	cell: cellSchema,
-	lighting: lightingSchema
+	lighting: lightingSchema,
+	rules: rulesSchema,
+	pinout: pinoutSchema
 });
 
 export type Point = z.infer<typeof pointSchema>;
