@@ -1,6 +1,6 @@
 /**
- * Builds the demo design: the readout of a fictional battery-powered irrigation controller
- * ("Rillwise RC-4"). Four slanted 7-segment digits with decimal points and a colon, a ten-step
+ * Builds the demo design: the readout of a fictional battery-powered garden-water timer
+ * ("Brookfern garden-water timer"). Four slanted 7-segment digits with decimal points and a colon, a ten-step
  * soil-moisture bar, a battery gauge and status icons, on four commons.
  *
  * Run: npx tsx scripts/build-demo.ts   (writes src/lib/core/design/demo-design.json)
@@ -238,7 +238,7 @@ assign(['rain']);
 const design: Design = {
 	format: DESIGN_FORMAT,
 	version: DESIGN_VERSION,
-	name: 'Rillwise RC-4 irrigation controller (demo)',
+	name: 'Brookfern garden-water timer (demo)',
 	glass: {
 		width_mm: 66,
 		height_mm: 42,

@@ -3,7 +3,7 @@ import { openApp } from './ready';
 
 test('opens with the demo drawn to scale and its drive verdict', async ({ page }) => {
 	await openApp(page);
-	await expect(page.getByTestId('design-name')).toContainText('irrigation controller');
+	await expect(page.getByTestId('design-name')).toContainText('garden-water timer');
 	await expect(page.locator('[data-electrode]')).toHaveCount(53);
 	await expect(page.getByTestId('selection-ratio')).toHaveText('1.7321');
 	await expect(page.getByTestId('drive-verdict')).toContainText('switches cleanly');
@@ -43,7 +43,7 @@ test('an invalid file shows path-named errors and keeps the open design', async 
 	const error = page.getByTestId('load-error');
 	await expect(error).toContainText('broken.json was not opened');
 	await expect(error).toContainText('glass.width_mm: expected a number greater than 0');
-	await expect(page.getByTestId('design-name')).toContainText('irrigation controller');
+	await expect(page.getByTestId('design-name')).toContainText('garden-water timer');
 	await expect(page.locator('[data-electrode]')).toHaveCount(53);
 });
 

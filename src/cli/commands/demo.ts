@@ -7,7 +7,7 @@ import type { CliIo } from '../io';
 
 export const DEMO_HELP = `Usage: sunglyph demo
 
-Writes the demo design (a fictional irrigation controller's readout) as JSON to stdout,
+Writes the demo design (a fictional garden-water timer's readout) as JSON to stdout,
 e.g.  sunglyph demo > controller.json`;
 
 export function runDemo(args: string[], io: CliIo): number {

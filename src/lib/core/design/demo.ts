@@ -1,5 +1,5 @@
 /**
- * The demo design shipped with sunglyph (a fictional irrigation controller's readout), built by
+ * The demo design shipped with sunglyph (a fictional garden-water timer's readout), built by
  * scripts/build-demo.ts and kept as a file so it opens on first start.
  */
 import demoJson from './demo-design.json';

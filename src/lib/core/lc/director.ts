@@ -11,14 +11,14 @@
  */
 import { assertValidGeometry, type DirectorCell } from './cell';
 import { M_PER_UM } from './constants';
-import { createDirectorWorkspace, energyOf, type DirectorWorkspace } from './directorKernel';
-import { DEFAULT_NEWTON_SETTINGS, minimiseDirector, type NewtonSettings } from './directorNewton';
+import { createDirectorWorkspace, energyOf, type DirectorWorkspace } from './director-kernel';
+import { DEFAULT_NEWTON_SETTINGS, minimiseDirector, type NewtonSettings } from './director-newton';
 import {
 	extractSolution,
 	loadConstants,
 	loadInitialGuess,
 	loadStartProfile
-} from './directorSetup';
+} from './director-setup';
 import type { DirectorProfile, DirectorSolution } from './profile';
 import { splayThreshold_V, twistedThreshold_V } from './threshold';
 

@@ -7,7 +7,7 @@
  * the switching branch, downwards for the relaxing one. One workspace serves the whole sweep.
  */
 import type { DirectorCell } from './cell';
-import { createDirectorWorkspace } from './directorKernel';
+import { createDirectorWorkspace } from './director-kernel';
 import {
 	checkCell,
 	checkVoltage,
@@ -16,7 +16,7 @@ import {
 	solveAlong,
 	type DirectorSettings
 } from './director';
-import { loadInitialGuess, loadStartProfile } from './directorSetup';
+import { loadInitialGuess, loadStartProfile } from './director-setup';
 import type { DirectorProfile, DirectorSolution } from './profile';
 
 export function sweepVoltage(

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { cellAt } from '../../src/lib/core/lc/cell';
 import { solveDirector } from '../../src/lib/core/lc/director';
-import { createDirectorWorkspace } from '../../src/lib/core/lc/directorKernel';
-import { DEFAULT_NEWTON_SETTINGS, minimiseDirector } from '../../src/lib/core/lc/directorNewton';
-import { loadConstants, loadStartProfile } from '../../src/lib/core/lc/directorSetup';
+import { createDirectorWorkspace } from '../../src/lib/core/lc/director-kernel';
+import { DEFAULT_NEWTON_SETTINGS, minimiseDirector } from '../../src/lib/core/lc/director-newton';
+import { loadConstants, loadStartProfile } from '../../src/lib/core/lc/director-setup';
 import {
 	CYANOBIPHENYL_EUTECTIC_HIGH_DN,
 	GENERIC_REFLECTIVE_TN

@@ -2,14 +2,14 @@ import { describe, expect, it } from 'vitest';
 import {
 	factorBlockTridiagonal,
 	solveBlockTridiagonal
-} from '../../src/lib/core/lc/blockTridiagonal';
+} from '../../src/lib/core/lc/block-tridiagonal';
 import {
 	assembleDirector,
 	createDirectorWorkspace,
 	energyOf,
 	setWorkspaceConstants,
 	type DirectorWorkspace
-} from '../../src/lib/core/lc/directorKernel';
+} from '../../src/lib/core/lc/director-kernel';
 
 /** Dense Hessian entry (j, k) of B − Q·g gᵀ from the workspace's banded storage. */
 function hessianEntry(ws: DirectorWorkspace, j: number, k: number): number {

@@ -9,8 +9,8 @@
  */
 import type { DirectorCell } from './cell';
 import { M_PER_UM, RAD_PER_DEG, VACUUM_PERMITTIVITY_F_PER_M } from './constants';
-import { energyOf, setWorkspaceConstants, type DirectorWorkspace } from './directorKernel';
-import { nudgeTilt } from './directorNewton';
+import { energyOf, setWorkspaceConstants, type DirectorWorkspace } from './director-kernel';
+import { nudgeTilt } from './director-newton';
 import {
 	midPlaneValue,
 	resampleNodes,

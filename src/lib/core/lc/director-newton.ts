@@ -23,8 +23,8 @@
  *   near-vertical ones (whose azimuth is optically irrelevant) by ≤ ≈ 1e-3 rad;
  * - 'not-converged': iteration limit or no descent possible.
  */
-import { factorBlockTridiagonal, solveBlockTridiagonal } from './blockTridiagonal';
-import { assembleDirector, energyOf, type DirectorWorkspace } from './directorKernel';
+import { factorBlockTridiagonal, solveBlockTridiagonal } from './block-tridiagonal';
+import { assembleDirector, energyOf, type DirectorWorkspace } from './director-kernel';
 
 export interface NewtonSettings {
 	/** Converged when the unshifted Newton step is below this, rad. */
