@@ -16,6 +16,9 @@ import { indicesAt } from '../src/lib/core/lc/temperature';
 import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
 import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
 import { demoDesign } from '../src/lib/core/design/demo';
+import { buildSpatialIndex } from '../src/lib/core/geometry/spatial-index';
+import { hitTest } from '../src/lib/core/geometry/hit-test';
+import { ellipseContour } from '../src/lib/core/geometry/primitive-shapes';
 
 interface Row {
 	name: string;
@@ -114,6 +117,28 @@ const demo = demoDesign();
 rows.push(
 	measure('drive check of the demo design', null, 400, () => {
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
+	})
+);
+
+const curvedElectrodes = Array.from({ length: 320 }, (_, i) => ({
+	id: `d${i}`,
+	name: `d${i}`,
+	kind: 'segment' as const,
+	outline: ellipseContour({
+		cx_mm: (i % 20) * 5,
+		cy_mm: Math.floor(i / 20) * 5,
+		rx_mm: 2,
+		ry_mm: 1.5
+	}),
+	holes: [],
+	common: null,
+	line: null,
+	locked: false
+}));
+rows.push(
+	measure('spatial index: 320 curved electrodes, build + 1000 hit tests', 50, 30, () => {
+		const index = buildSpatialIndex(curvedElectrodes);
+		for (let k = 0; k < 1000; k++) hitTest(index, { x: (k * 7.3) % 100, y: (k * 3.1) % 80 }, 0.2);
 	})
 );
 

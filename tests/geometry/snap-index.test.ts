@@ -144,7 +144,7 @@ describe('spatial index', () => {
 					}
 				}
 			),
-			{ numRuns: 5 }
+			{ numRuns: 60 }
 		);
 		const many = Array.from({ length: 320 }, (_, i) =>
 			el(
@@ -152,15 +152,9 @@ describe('spatial index', () => {
 				ellipseContour({ cx_mm: (i % 20) * 5, cy_mm: Math.floor(i / 20) * 5, rx_mm: 2, ry_mm: 1.5 })
 			)
 		);
-		const t0 = performance.now();
 		const idx = buildSpatialIndex(many);
 		for (let k = 0; k < 1000; k++) hitTest(idx, { x: (k * 7.3) % 100, y: (k * 3.1) % 80 }, 0.2);
 		const rebuilt = buildSpatialIndex([...many.slice(1), many[0]], { previous: idx });
-		const elapsed = performance.now() - t0;
 		expect(rebuilt.entries[0].rings).toBe(idx.entries[1].rings);
-		console.log(
-			`[spatial index] 320 curved electrodes: build + 1000 hit tests + rebuild in ${elapsed.toFixed(1)} ms`
-		);
-		expect(elapsed).toBeLessThan(1500);
 	});
 });

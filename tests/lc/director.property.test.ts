@@ -1,3 +1,4 @@
+import { propertySeed } from '../helpers/seed';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { cellAt } from '../../src/lib/core/lc/cell';
@@ -62,7 +63,7 @@ describe('director solver properties', () => {
 					expect(solution.energy_Jm2).toBeLessThanOrEqual(guess);
 				}
 			),
-			{ numRuns: 100, seed: 20240611 }
+			{ numRuns: 100, seed: propertySeed('director energy') }
 		);
 	});
 
@@ -90,7 +91,7 @@ describe('director solver properties', () => {
 					expect(distance).toBeLessThan(strict ? 1e-6 : 1e-4);
 				}
 			),
-			{ numRuns: 100, seed: 1971 }
+			{ numRuns: 100, seed: propertySeed('director path independence') }
 		);
 		console.log(`path independence: worst director difference ${worst.toExponential(2)} rad`);
 	});
@@ -115,7 +116,7 @@ describe('director solver properties', () => {
 					expect(Math.abs(left.energy_Jm2 - right.energy_Jm2)).toBeLessThan(1e-9 * scale_Jm2);
 				}
 			),
-			{ numRuns: 50, seed: 42 }
+			{ numRuns: 50, seed: propertySeed('director symmetry') }
 		);
 	});
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createMatrix, applyToVector, createVector } from '../../src/lib/core/optics/complex2x2';
-import { jonesOfTwistedLayer } from '../../src/lib/core/optics/twisted-layer';
+import { jonesOfTwistedLayer, retardationOf } from '../../src/lib/core/optics/twisted-layer';
 import { goochTarryLeak } from './fixtures';
 import { checkAgainstReference } from './reference-check';
 
@@ -158,5 +158,19 @@ describe('closed-form twisted layer (90° TN, ideal polarizers)', () => {
 			expect(e[2]).toBeCloseTo(Math.sin(twist_rad), 12);
 			expect(Math.abs(e[1]) + Math.abs(e[3])).toBeLessThan(1e-12);
 		}
+	});
+});
+
+describe('retardation of a birefringent layer', () => {
+	it('a layer with Δn·d = λ/4 is a quarter-wave plate, Γ = π/2; λ/2 gives π', () => {
+		// Γ = 2π·Δn·d/λ, the phase retardation of a wave plate (Hecht, Optics, 5th ed., §8.7).
+		const quarter = retardationOf({
+			birefringence: 0.1,
+			thickness_m: 1.375e-6,
+			wavelength_nm: 550
+		});
+		const half = retardationOf({ birefringence: 0.2, thickness_m: 1.6e-6, wavelength_nm: 640 });
+		expect(Math.abs(quarter - Math.PI / 2)).toBeLessThan(1e-12);
+		expect(Math.abs(half - Math.PI)).toBeLessThan(1e-12);
 	});
 });

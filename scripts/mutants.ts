@@ -1,0 +1,171 @@
+/**
+ * Plausible one-line mistakes in the physics and drive core (sign, square, constant, wrong
+ * operand, off by one). `npm run mutate` applies each to a temporary copy of the project and runs
+ * the tests that guard that code: a mutant that survives is a missing test.
+ */
+export interface Mutant {
+	id: string;
+	file: string;
+	/** Exact text replaced; each must occur once in the file. */
+	edits: ReadonlyArray<readonly [from: string, to: string]>;
+	/** Test files or folders to run (vitest filters). */
+	tests: readonly string[];
+}
+
+const DRIVE = ['tests/drive'];
+const OPTICS = ['tests/optics', 'tests/cell'];
+const COLOR = ['tests/color'];
+const LC = ['tests/lc'];
+
+export const MUTANTS: readonly Mutant[] = [
+	{
+		id: 'rms: off level not squared',
+		file: 'src/lib/core/drive/rms-drive.ts',
+		edits: [['(n - 1 + (a - 2) * (a - 2))', '(n - 1 + (a - 2))']],
+		tests: DRIVE
+	},
+	{
+		id: 'rms: bias step over a − 1',
+		file: 'src/lib/core/drive/rms-drive.ts',
+		edits: [['const step_V = amplitude_V / a;', 'const step_V = amplitude_V / (a - 1);']],
+		tests: DRIVE
+	},
+	{
+		id: 'Alt–Pleshko limit: wrong denominator',
+		file: 'src/lib/core/drive/rms-drive.ts',
+		edits: [['Math.sqrt((root + 1) / (root - 1))', 'Math.sqrt((root + 1) / root)']],
+		tests: DRIVE
+	},
+	{
+		id: 'optimal bias: off by one',
+		file: 'src/lib/core/drive/rms-drive.ts',
+		edits: [['return Math.sqrt(commons) + 1;', 'return Math.sqrt(commons);']],
+		tests: DRIVE
+	},
+	{
+		id: 'window: off-side percent over V90',
+		file: 'src/lib/core/drive/operating-window.ts',
+		edits: [['(100 * offMargin_V) / point.v10_V', '(100 * offMargin_V) / point.v90_V']],
+		tests: DRIVE
+	},
+	{
+		id: 'window: arithmetic instead of geometric mean',
+		file: 'src/lib/core/drive/operating-window.ts',
+		edits: [['Math.sqrt(window.min_V * window.max_V)', '(window.min_V + window.max_V) / 2']],
+		tests: DRIVE
+	},
+	{
+		id: 'window: upper limit over k_on',
+		file: 'src/lib/core/drive/operating-window.ts',
+		edits: [['point.v10_V / unit.off_V', 'point.v10_V / unit.on_V']],
+		tests: DRIVE
+	},
+	{
+		id: 'temperature shift: sign',
+		file: 'src/lib/core/drive/threshold-at-temperature.ts',
+		edits: [
+			['(temperature_C - thresholds.reference_C)', '(thresholds.reference_C - temperature_C)']
+		],
+		tests: DRIVE
+	},
+	{
+		id: 'twist threshold: K22 weight',
+		file: 'src/lib/core/lc/threshold.ts',
+		edits: [['(material.k33_N - 2 * material.k22_N)', '(material.k33_N - material.k22_N)']],
+		tests: LC
+	},
+	{
+		id: 'twist threshold: chiral term factor',
+		file: 'src/lib/core/lc/threshold.ts',
+		edits: [['4 * material.k22_N * gapToPitch * turns', '2 * material.k22_N * gapToPitch * turns']],
+		tests: LC
+	},
+	{
+		id: 'threshold: missing π',
+		file: 'src/lib/core/lc/threshold.ts',
+		edits: [['return Math.PI * Math.sqrt(', 'return Math.sqrt(']],
+		tests: LC
+	},
+	{
+		id: 'twisted layer: opposite time convention',
+		file: 'src/lib/core/optics/twisted-layer.ts',
+		edits: [
+			['out[1] = -halfGamma * sx;', 'out[1] = halfGamma * sx;'],
+			['out[7] = halfGamma * sx;', 'out[7] = -halfGamma * sx;']
+		],
+		tests: OPTICS
+	},
+	{
+		id: 'twisted layer: full instead of half retardation',
+		file: 'src/lib/core/optics/twisted-layer.ts',
+		edits: [['const halfGamma = retardation_rad / 2;', 'const halfGamma = retardation_rad;']],
+		tests: OPTICS
+	},
+	{
+		id: 'retardation: missing factor 2',
+		file: 'src/lib/core/optics/twisted-layer.ts',
+		edits: [
+			['(2 * Math.PI * birefringence * thickness_m)', '(Math.PI * birefringence * thickness_m)']
+		],
+		tests: OPTICS
+	},
+	{
+		id: 'polarizer: off-diagonal sign of amplitudes',
+		file: 'src/lib/core/optics/polarizer.ts',
+		edits: [['const offDiagonal = (t1 - t2) * c * s;', 'const offDiagonal = (t1 + t2) * c * s;']],
+		tests: OPTICS
+	},
+	{
+		id: 'polarizer: amplitude not square-rooted',
+		file: 'src/lib/core/optics/polarizer.ts',
+		edits: [['const t2 = Math.sqrt(k2);', 'const t2 = k2;']],
+		tests: OPTICS
+	},
+	{
+		id: 'Fresnel: not squared',
+		file: 'src/lib/core/optics/fresnel.ts',
+		edits: [['return r * r;', 'return Math.abs(r);']],
+		tests: OPTICS
+	},
+	{
+		id: 'ΔE00: G without complement',
+		file: 'src/lib/core/color/delta-e-2000.ts',
+		edits: [
+			[
+				'const G = 0.5 * (1 - chromaWeight(meanChroma));',
+				'const G = 0.5 * chromaWeight(meanChroma);'
+			]
+		],
+		tests: COLOR
+	},
+	{
+		id: 'ΔE00: rotation term sign',
+		file: 'src/lib/core/color/delta-e-2000.ts',
+		edits: [['const RT = -Math.sin(', 'const RT = Math.sin(']],
+		tests: COLOR
+	},
+	{
+		id: 'ΔE00: S_L constant',
+		file: 'src/lib/core/color/delta-e-2000.ts',
+		edits: [['(0.015 * Lbar50sq)', '(0.15 * Lbar50sq)']],
+		tests: COLOR
+	},
+	{
+		id: 'CIELAB: linear segment offset dropped',
+		file: 'src/lib/core/color/cielab.ts',
+		edits: [['t * LINEAR_SLOPE + LINEAR_OFFSET', 't * LINEAR_SLOPE']],
+		tests: COLOR
+	},
+	{
+		id: 'tristimulus: Z from the y weights',
+		file: 'src/lib/core/color/spectrum-to-xyz.ts',
+		edits: [['Z += z[i] * r;', 'Z += y[i] * r;']],
+		tests: COLOR
+	},
+	{
+		id: 'Lambertian luminance: missing π',
+		file: 'src/lib/core/color/lambertian-luminance.ts',
+		edits: [['(reflectance * illuminance_lx) / Math.PI', 'reflectance * illuminance_lx']],
+		tests: COLOR
+	}
+];
