@@ -59,8 +59,8 @@ describe('Alt–Pleshko bound', () => {
 });
 
 describe('published duty/bias selection ratios', () => {
-	it('agrees with driver data-sheet values', () => {
-		// Source: published LCD-driver data sheets and microcontroller LCD manuals (common values):
+	it('agrees with the selection ratios of the usual duty/bias pairs', () => {
+		// Common practice (the pairs LCD drivers offer, with their ratios as the trade quotes them):
 		// 1/4 duty 1/3 bias → √3; 1/3 duty 1/2 bias → √3; 1/2 duty 1/2 or 1/3 bias → √5;
 		// 1/4 duty 1/2 bias → 1.528; 1/6 duty 1/3 bias V_on 0.509, V_off 0.333 of V_LCD.
 		const ratio = (n: number, a: number) =>
@@ -73,7 +73,7 @@ describe('published duty/bias selection ratios', () => {
 				{ label: '1/2 duty, 1/3 bias', expected: Math.sqrt(5), actual: ratio(2, 3) },
 				{ label: '1/4 duty, 1/2 bias', expected: 1.5275, actual: ratio(4, 2) }
 			],
-			{ tolerance: 1e-4, unit: '(ratio)', source: 'LCD-driver data sheets' }
+			{ tolerance: 1e-4, unit: '(ratio)', source: 'common practice: usual duty/bias pairs' }
 		);
 		const six = rmsVoltages({ commons: 6, biasDivisor: 3, amplitude_V: 1 });
 		expectWithin(
@@ -81,12 +81,34 @@ describe('published duty/bias selection ratios', () => {
 				{ label: '1/6 duty 1/3 bias V_on', expected: 0.509, actual: six.on_V },
 				{ label: '1/6 duty 1/3 bias V_off', expected: 0.333, actual: six.off_V }
 			],
-			{ tolerance: 5e-4, unit: '× V_LCD', source: 'LCD-driver data sheets (3-decimal values)' }
+			{ tolerance: 5e-4, unit: '× V_LCD', source: 'common practice: 1/6 duty levels to 3 decimals' }
 		);
 	});
 
-	it('agrees with the data-sheet form V = V_LCD·sqrt((a²±2a+n)/(n(1+a)²)) with a = divisor − 1', () => {
-		// Source: published LCD-driver data sheets state the same levels with a = B − 1.
+	it('levels at biases where (a − 2)² differs from a − 2, computed by hand', () => {
+		// Alt & Pleshko (1974) relations, V_on = (V/a)·√((N − 1 + a²)/N), V_off =
+		// (V/a)·√((N − 1 + (a − 2)²)/N), evaluated with a calculator:
+		// N 8, a 4: V_on = ¼·√(23/8) = 0.423896, V_off = ¼·√(11/8) = 0.293151;
+		// N 16, a 5: V_on = ⅕·√(40/16) = 0.316228, V_off = ⅕·√(24/16) = 0.244949;
+		// N 3, a 2.5: V_on = 0.4·√(8.25/3) = 0.663325, V_off = 0.4·√(2.25/3) = 0.346410.
+		const level = (n: number, a: number) =>
+			rmsVoltages({ commons: n, biasDivisor: a, amplitude_V: 1 });
+		expectWithin(
+			[
+				{ label: '1/8 duty 1/4 bias V_on', expected: 0.423896, actual: level(8, 4).on_V },
+				{ label: '1/8 duty 1/4 bias V_off', expected: 0.293151, actual: level(8, 4).off_V },
+				{ label: '1/16 duty 1/5 bias V_on', expected: 0.316228, actual: level(16, 5).on_V },
+				{ label: '1/16 duty 1/5 bias V_off', expected: 0.244949, actual: level(16, 5).off_V },
+				{ label: '1/3 duty 1/2.5 bias V_on', expected: 0.663325, actual: level(3, 2.5).on_V },
+				{ label: '1/3 duty 1/2.5 bias V_off', expected: 0.34641, actual: level(3, 2.5).off_V }
+			],
+			{ tolerance: 1e-6, unit: '× V_LCD', source: 'Alt & Pleshko 1974, hand computation' }
+		);
+	});
+
+	it('agrees with the equivalent form V = V_LCD·sqrt((a²±2a+n)/(n(1+a)²)) with a = divisor − 1', () => {
+		// The same levels written with a = B − 1, as driver documentation commonly states them
+		// (common practice); algebraically identical to the Alt & Pleshko form.
 		for (const n of [2, 3, 4, 5, 8, 16, 33, 64]) {
 			for (const divisor of [2, 2.5, 3, 4, 5, 7.3, 9]) {
 				const a = divisor - 1;
