@@ -1,7 +1,9 @@
 /**
  * Random command sequences for property tests: each step is a few random numbers that are turned
  * into a command against the *current* design (picking existing ids by index), so every step is
- * meaningful however the design has changed. Steps a design cannot take are skipped.
+ * meaningful however the design has changed. A step is only generated for a command whose
+ * preconditions the design meets (ids to pick from exist); a command may still refuse with a
+ * CommandError (an edit the geometry does not allow), and every other error fails the test.
  */
 import fc from 'fast-check';
 import { addElectrodes } from '../../src/lib/core/commands/add-electrodes';
@@ -68,6 +70,23 @@ function selection(design: Design, s: Step): string[] {
 }
 
 type Maker = (design: Design, s: Step) => Patch;
+/** What a maker needs from the design to be applicable. */
+type Needs = 'commons' | 'groups' | 'generated';
+
+/** Makers (by index in MAKERS) that pick a common, a group or a generated group. */
+const NEEDS: Partial<Record<number, Needs>> = {
+	14: 'groups',
+	22: 'commons',
+	23: 'commons',
+	25: 'generated'
+};
+
+function meets(design: Design, needs: Needs | undefined): boolean {
+	if (needs === 'commons') return design.commons.length > 0;
+	if (needs === 'groups') return design.groups.length > 0;
+	if (needs === 'generated') return design.groups.some((g) => g.generator);
+	return true;
+}
 
 const MAKERS: readonly Maker[] = [
 	(d, s) => moveElectrodes(d, { ids: selection(d, s), dx_mm: s.x, dy_mm: s.y }),
@@ -206,9 +225,10 @@ const MAKERS: readonly Maker[] = [
 /** The patch for a step, or null when the step does not apply to this design. */
 export function patchForStep(design: Design, step: Step): Patch | null {
 	try {
-		if (design.electrodes.length === 0 && step.kind % MAKERS.length !== 7)
+		if (design.electrodes.length === 0)
 			return addElectrodes(design, { electrodes: [{ outline: square(step.x, step.y) }] });
-		return MAKERS[step.kind % MAKERS.length](design, step);
+		const applicable = MAKERS.filter((_, index) => meets(design, NEEDS[index]));
+		return applicable[step.kind % applicable.length](design, step);
 	} catch (error) {
 		if (
 			error instanceof CommandError ||
@@ -216,7 +236,6 @@ export function patchForStep(design: Design, step: Step): Patch | null {
 				/islands|vanishes|no room|too (narrow|short)|empty/.test(error.message))
 		)
 			return null;
-		if (error instanceof TypeError && /undefined/.test(String(error.message))) return null; // picked from an empty list
 		throw error;
 	}
 }
