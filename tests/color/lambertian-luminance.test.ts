@@ -7,8 +7,20 @@ const L = (reflectance: number, illuminance_lx: number) =>
 	lambertianLuminance_cdm2({ reflectance, illuminance_lx });
 
 describe('lambertianLuminance_cdm2', () => {
-	it('matches the worked values (half a unit in the last published digit)', () => {
-		const source = 'values derived from L = ρE/π (Lambertian reflector, standard photometry)';
+	it('a perfect diffuser under 1 lx has 1/π cd/m², the apostilb (CIE S 017 ILV)', () => {
+		// The apostilb, an old unit of luminance, is defined as the luminance of a perfect
+		// diffuser illuminated with 1 lx: 1 asb = 1/π cd/m² = 0.318310 cd/m² (CIE S 017:2011, ILV).
+		expectWithinReference({
+			quantity: 'luminance of a perfect diffuser under 1 lx',
+			unit: 'cd/m²',
+			tolerance: 1e-6,
+			source: 'CIE S 017:2011 (ILV), apostilb',
+			rows: [{ label: '1 lx, ρ = 1', computed: L(1, 1), published: 0.31831 }]
+		});
+	});
+
+	it('equals ρ·E/π evaluated by hand (consistency check, half a unit in the last kept digit)', () => {
+		const source = 'L = ρE/π evaluated by hand (consistency check)';
 		expectWithinReference({
 			quantity: 'luminance, office to indoor',
 			unit: 'cd/m²',

@@ -9,12 +9,14 @@ import {
 import { expectReference, type ReferenceRow } from './reference';
 
 describe('Jakeman-Raynes response times', () => {
-	it('reproduce the worked Jakeman-Raynes table to 0.5 ms', () => {
-		// Values derived from τ_off = γ1d²/(Kπ²), τ_on = τ_off/((V/V_th)² − 1) [Jakeman & Raynes,
-		// Phys. Lett. A 39:69 (1972)], printed to 1 ms: tolerance 0.5 ms.
+	it('equal the Jakeman–Raynes closed form evaluated by hand, to 0.5 ms (consistency check)', () => {
+		// A consistency check of the code against its model, not against measurements: the closed
+		// form τ_off = γ1·d²/(K·π²), τ_on = τ_off/((V/V_th)² − 1) [Jakeman & Raynes, Phys. Lett. A
+		// 39:69 (1972)] evaluated with a calculator and rounded to whole milliseconds, so the
+		// tolerance is half a millisecond.
 		const table: [string, number, number, number, number, number, number][] = [
-			['E7-like 5 µm', 0.2, 5, 12.1, 42, 14, 5],
-			['E7-like 7 µm', 0.2, 7, 12.1, 82, 27, 10],
+			['cyanobiphenyl-like 5 µm', 0.2, 5, 12.1, 42, 14, 5],
+			['cyanobiphenyl-like 7 µm', 0.2, 7, 12.1, 82, 27, 10],
 			['TN mix 25 °C', 0.15, 6, 10, 55, 18, 7],
 			['TN mix -20 °C', 1.5, 6, 12, 456, 152, 57]
 		];

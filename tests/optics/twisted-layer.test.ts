@@ -104,10 +104,10 @@ describe('closed-form twisted layer (90° TN, ideal polarizers)', () => {
 				})
 			)[0];
 		});
-		// tolerance 1e-5: the table is printed to 5 decimals (half a unit is 5e-6)
+		// tolerance 1e-5: the table keeps 5 decimals (half a unit is 5e-6)
 		checkAgainstReference({
 			label: 'T_NB table',
-			source: 'values derived from T_NB = sin²((π/2)·sqrt(1+u²))/(1+u²) (Gooch & Tarry 1975)',
+			source: 'Gooch & Tarry, J. Phys. D 8:1575 (1975): T_NB relation evaluated by hand',
 			actual,
 			expected: tableT,
 			tolerance: 1e-5,

@@ -1,7 +1,9 @@
 /*
  * Values of the second radiation constant c2 = h·c/k that colorimetric definitions were built on.
  * Illuminant A and the D-series names fixed c2 at the value of their day; CCTs quoted on today's
- * scale follow from T_now = T_then · c2_now / c2_then. Source: CIE 15:2004 and notes.
+ * scale follow from T_now = T_then · c2_now / c2_then. Source: CIE 15:2004, Colorimetry, 3rd ed.
+ * (the definitions of illuminant A and the D series; the c2 values of the temperature scales are
+ * from memory of that text).
  */
 
 /** c2 in the definition of illuminant A (1931), m·K. */
