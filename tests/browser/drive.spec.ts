@@ -17,7 +17,7 @@ test('changing the bias updates the figures live', async ({ page }) => {
 	await expect(page.getByTestId('selection-ratio')).toHaveText('1.7321');
 	const bias = page.getByTestId('bias-input');
 	await bias.fill('1/2');
-	// Source: LCD-driver data sheets: 1/4 duty with 1/2 bias gives V_on/V_off = 1.528.
+	// Alt & Pleshko (1974) relations by hand: 1/4 duty with 1/2 bias gives V_on/V_off = √(7/3) = 1.528.
 	await expect(page.getByTestId('selection-ratio')).toHaveText('1.5275');
 	await bias.fill('1/1');
 	await expect(page.getByText('not a usable bias')).toBeVisible();

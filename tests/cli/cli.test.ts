@@ -4,7 +4,7 @@ import { runCli } from './run-cli';
 
 describe('sunglyph drive', () => {
 	it('gives the published 1/4 duty, 1/3 bias figures as JSON', async () => {
-		// Source: LCD-driver data sheets (1/4 duty, 1/3 bias: V_on/V_off = √3); Alt & Pleshko 1974 for N = 4.
+		// Alt & Pleshko (1974): 1/4 duty, 1/3 bias gives V_on/V_off = √3, the limit for N = 4.
 		const { code, stdout } = await runCli([
 			'drive',
 			'--commons',

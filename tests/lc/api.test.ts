@@ -52,8 +52,13 @@ describe('lc public API', () => {
 		);
 	});
 
-	it('derives constants from their definitions', () => {
+	it('uses the CODATA 2018 constants', () => {
+		// CODATA 2018 recommended values (Tiesinga et al., Rev. Mod. Phys. 93:025010 (2021)):
+		// ε0 = 8.8541878128(13)e-12 F/m; k_B = 1.380649e-23 J/K exactly; e = 1.602176634e-19 C
+		// exactly, so k_B/e = 8.617333262…e-5 eV/K.
 		expect(lc.VACUUM_PERMITTIVITY_F_PER_M).toBe(8.8541878128e-12);
+		expect(lc.BOLTZMANN_J_PER_K).toBe(1.380649e-23);
+		expect(lc.ELEMENTARY_CHARGE_C).toBe(1.602176634e-19);
 		expect(lc.BOLTZMANN_EV_PER_K).toBeCloseTo(8.617333262e-5, 14);
 	});
 });

@@ -8,8 +8,9 @@ import {
 import { indicesAt } from '../../src/lib/core/lc/temperature';
 import { expectReference, type ReferenceRow } from './reference';
 
-// Check values derived from the extended Cauchy coefficients of Li, Wen, Gauza, Lu & Wu,
-// J. Display Technol. 1:51 (2005), at 25 °C, rounded to 1e-4.
+// Consistency check: the extended Cauchy coefficients published by Li, Wen, Gauza, Lu & Wu,
+// J. Display Technol. 1:51 (2005), evaluated by hand at 25 °C and rounded to 1e-4. It checks our
+// transcription of the published coefficients and their evaluation, not the fit to measurement.
 const TABLE: [string, typeof CYANOBIPHENYL_SINGLE, number, number, number, number][] = [
 	['E7', CYANOBIPHENYL_EUTECTIC_HIGH_DN, 450, 1.8001, 1.5419, 0.2582],
 	['E7', CYANOBIPHENYL_EUTECTIC_HIGH_DN, 550, 1.7497, 1.5261, 0.2236],
@@ -21,7 +22,7 @@ const TABLE: [string, typeof CYANOBIPHENYL_SINGLE, number, number, number, numbe
 ];
 
 describe('extended Cauchy dispersion', () => {
-	it('reproduces the Li et al. (2005) check table to 1e-4 (index units)', () => {
+	it('evaluates the Li et al. (2005) coefficients as by hand, to 1e-4 (index units)', () => {
 		const rows: ReferenceRow[] = [];
 		for (const [name, material, wavelength_nm, ne, no, dn] of TABLE) {
 			const at = `${name} ${wavelength_nm} nm`;
@@ -38,7 +39,7 @@ describe('extended Cauchy dispersion', () => {
 		expectReference({
 			label: 'Cauchy indices',
 			source:
-				'derived from the Cauchy fits of Li, Wen, Gauza, Lu & Wu, J. Display Technol. 1:51 (2005)',
+				'Cauchy coefficients of Li, Wen, Gauza, Lu & Wu, J. Display Technol. 1:51 (2005), by hand',
 			unit: '(index)',
 			tolerance: 1e-4,
 			rows

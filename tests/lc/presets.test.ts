@@ -27,8 +27,9 @@ describe('presets', () => {
 	});
 
 	it('generic reflective-TN preset has the typical values it claims', () => {
-		// Typical values for reflective-TN mixtures (Δn 0.10-0.12 at 589 nm, T_NI ≈ 90 °C,
-		// V_th 1.3-1.6 V, γ1 ≈ 0.15 Pa·s, E_a ≈ 0.35 eV): a plausibility range, not a reference.
+		// Typical values for reflective-TN mixtures, from memory (Δn 0.10-0.12 at 589 nm,
+		// T_NI ≈ 90 °C, V_th 1.3-1.6 V, γ1 ≈ 0.15 Pa·s, E_a ≈ 0.35 eV): a plausibility range,
+		// not a reference.
 		const { ne, no } = indicesAt({
 			material: GENERIC_REFLECTIVE_TN,
 			temperature_C: 25,
