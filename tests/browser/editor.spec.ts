@@ -167,7 +167,7 @@ test('copies and pastes electrodes, and the shortcut help lists the tools', asyn
 	await expect(electrodes(page)).toHaveCount(53);
 	await page.keyboard.press('?');
 	const help = page.getByTestId('shortcut-help');
-	for (const name of ['Pick', 'Nodes', 'Box', 'Oval', 'Curve', 'Digits…', 'Icons…', 'Undo'])
+	for (const name of ['Pick', 'Points', 'Box', 'Oval', 'Curve', 'Digits…', 'Icons…', 'Undo'])
 		await expect(help).toContainText(name);
 	await page.keyboard.press('Escape');
 	await expect(help).toHaveCount(0);
@@ -191,11 +191,11 @@ test('numeric entry applies valid sizes and explains invalid ones', async ({ pag
 });
 
 test('unites two overlapping boxes, makes a row of copies and aligns them', async ({ page }) => {
-	await page.keyboard.press('b');
+	await page.keyboard.press('5');
 	await drag(page, await screenOf(page, 40, 36), await screenOf(page, 44, 39));
 	await drag(page, await screenOf(page, 42, 37), await screenOf(page, 47, 40));
 	await expect(electrodes(page)).toHaveCount(55);
-	await page.keyboard.press('v');
+	await page.keyboard.press('1');
 	const first = await screenOf(page, 40.5, 36.5);
 	const second = await screenOf(page, 46.5, 39.5);
 	await page.mouse.click(first.x, first.y);

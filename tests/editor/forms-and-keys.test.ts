@@ -103,14 +103,23 @@ describe('keyboard chords', () => {
 		expect(describeChord('mod+z', true)).toBe('⌘Z');
 	});
 
-	it('every chord belongs to exactly one action and every tool has a key', () => {
+	it('every chord belongs to exactly one action; tools take the digits in rail order', () => {
 		const seen = new Map<string, string>();
 		for (const a of ACTIONS)
 			for (const c of a.chords) {
 				expect(seen.get(c), `${c} is used by ${seen.get(c)} and ${a.id}`).toBeUndefined();
 				seen.set(c, a.id);
 			}
-		for (const t of TOOLS) expect(actionForChord(t.key.toLowerCase())?.id).toBe(`tool-${t.id}`);
+		const keyed = TOOLS.filter((t) => t.key);
+		expect(keyed.map((t) => t.key)).toEqual(['1', '2', '3', '4', '5', '6', '7', '8', '9']);
+		for (const t of keyed) expect(actionForChord(t.key)?.id).toBe(`tool-${t.id}`);
+		// Panning has no tool key: Space or the middle button.
+		expect(TOOLS.find((t) => t.id === 'pan')!.key).toBe('');
+		// No single letter picks a tool.
+		for (const letter of 'abcdefghijklmnopqrstuvwxyz')
+			expect(actionForChord(letter)?.id ?? '').not.toMatch(/^tool-/);
+		expect(actionForChord(chordOf(key('Home', {})))?.id).toBe('fit-all');
+		expect(actionForChord(chordOf(key('Home', { shift: true })))?.id).toBe('true-size');
 		expect(actionForChord(chordOf(key('y', { ctrl: true })))?.id).toBe('redo');
 		expect(actionForChord(chordOf(key('z', { ctrl: true, shift: true })))?.id).toBe('redo');
 	});

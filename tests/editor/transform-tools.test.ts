@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { TurnTool, angleBetween } from '$lib/editor/tools/turn-tool';
 import { SizeTool } from '$lib/editor/tools/size-tool';
-import { NodesTool } from '$lib/editor/tools/nodes-tool';
+import { PointsTool } from '$lib/editor/tools/points-tool';
 import { shapeTightBounds } from '$lib/core/geometry/tight-bounds';
 import { turnHandlePoint, sizeHandlePoint, scaleForHandle } from '$lib/editor/handles';
 import { electrode, harness, square } from './fixtures';
@@ -86,7 +86,7 @@ describe('Nodes tool', () => {
 	it('drags one point of the selected electrode and leaves the rest', () => {
 		const h = harness();
 		h.editor.selection = new Set(['a']);
-		const p = h.pointer(new NodesTool());
+		const p = h.pointer(new PointsTool());
 		p.drag([12, 12], [13, 13.5]);
 		const outline = electrode(h.session.design, 'a').outline;
 		expect(outline[2]).toEqual({ x: 13, y: 13.5 });
@@ -97,7 +97,7 @@ describe('Nodes tool', () => {
 	it('deletes selected points with Delete and adds one on an edge with a double click', () => {
 		const h = harness();
 		h.editor.selection = new Set(['a']);
-		const tool = new NodesTool();
+		const tool = new PointsTool();
 		const p = h.pointer(tool);
 		p.down(11, 10, { clicks: 2 });
 		p.up(11, 10);
@@ -114,7 +114,7 @@ describe('Nodes tool', () => {
 	it('box-selects points and moves them together; Escape bails', () => {
 		const h = harness();
 		h.editor.selection = new Set(['a']);
-		const tool = new NodesTool();
+		const tool = new PointsTool();
 		const p = h.pointer(tool);
 		p.drag([9, 9], [12.5, 10.5]);
 		expect(h.editor.nodeSelection.size).toBe(2);
@@ -133,7 +133,7 @@ describe('Nodes tool', () => {
 
 	it('clicking an unselected electrode selects it for editing', () => {
 		const h = harness();
-		h.pointer(new NodesTool()).click(21, 11);
+		h.pointer(new PointsTool()).click(21, 11);
 		expect([...h.editor.selection]).toEqual(['b']);
 	});
 });

@@ -120,7 +120,7 @@ export const ACTIONS: readonly Action[] = [
 		id: `tool-${t.id}`,
 		label: t.name,
 		group: 'Tools',
-		chords: [t.key.toLowerCase()],
+		chords: t.key ? [t.key.toLowerCase()] : [],
 		run: (env) => (env.tool = t.id)
 	})),
 	{ id: 'undo', label: 'Undo', group: 'Edit', chords: ['mod+z'], run: (env) => env.undo() },
@@ -202,7 +202,7 @@ export const ACTIONS: readonly Action[] = [
 		id: 'mirror-h',
 		label: 'Mirror left–right',
 		group: 'Arrange',
-		chords: ['shift+h'],
+		chords: ['m'],
 		needs: 1,
 		run: edit('Mirror', (d, i) => mirrorElectrodes(d, { ids: i, direction: 'horizontal' }))
 	},
@@ -210,7 +210,7 @@ export const ACTIONS: readonly Action[] = [
 		id: 'mirror-v',
 		label: 'Mirror top–bottom',
 		group: 'Arrange',
-		chords: ['shift+v'],
+		chords: ['shift+m'],
 		needs: 1,
 		run: edit('Mirror', (d, i) => mirrorElectrodes(d, { ids: i, direction: 'vertical' }))
 	},
@@ -224,7 +224,7 @@ export const ACTIONS: readonly Action[] = [
 		id: 'distribute-h',
 		label: 'Space evenly across',
 		group: 'Arrange',
-		chords: ['alt+shift+h'],
+		chords: ['alt+s'],
 		needs: 3,
 		run: edit('Distribute', (d, i) => distributeElectrodes(d, { ids: i, axis: 'horizontal' }))
 	},
@@ -232,7 +232,7 @@ export const ACTIONS: readonly Action[] = [
 		id: 'distribute-v',
 		label: 'Space evenly down',
 		group: 'Arrange',
-		chords: ['alt+shift+v'],
+		chords: ['alt+shift+s'],
 		needs: 3,
 		run: edit('Distribute', (d, i) => distributeElectrodes(d, { ids: i, axis: 'vertical' }))
 	},
@@ -262,7 +262,7 @@ export const ACTIONS: readonly Action[] = [
 		id: 'bars',
 		label: 'Bars…',
 		group: 'Add',
-		chords: ['shift+b'],
+		chords: ['b'],
 		run: (env) => env.openDialog('bars')
 	},
 	{
@@ -286,12 +286,12 @@ export const ACTIONS: readonly Action[] = [
 		chords: ['-'],
 		run: (env) => env.zoomBy(0.8)
 	},
-	{ id: 'fit-all', label: 'Fit all', group: 'View', chords: ['0'], run: (env) => env.fitAll() },
+	{ id: 'fit-all', label: 'Fit all', group: 'View', chords: ['home'], run: (env) => env.fitAll() },
 	{
 		id: 'fit-selection',
 		label: 'Fit selection',
 		group: 'View',
-		chords: ['f'],
+		chords: ['end'],
 		needs: 1,
 		run: (env) => env.fitSelection()
 	},
@@ -299,7 +299,7 @@ export const ACTIONS: readonly Action[] = [
 		id: 'true-size',
 		label: 'True size (100 %)',
 		group: 'View',
-		chords: ['1'],
+		chords: ['shift+home'],
 		run: (env) => env.trueSize()
 	},
 	{
@@ -309,7 +309,7 @@ export const ACTIONS: readonly Action[] = [
 		chords: ['w'],
 		run: (env) => env.toggleViewMode()
 	},
-	{ id: 'grid', label: 'Show grid', group: 'View', chords: ['#'], run: (env) => env.toggleGrid() },
+	{ id: 'grid', label: 'Show grid', group: 'View', chords: ['g'], run: (env) => env.toggleGrid() },
 	{
 		id: 'help',
 		label: 'Keyboard shortcuts',

@@ -22,6 +22,8 @@ const NAMED = new Set([
 	'enter',
 	'escape',
 	'tab',
+	'home',
+	'end',
 	' '
 ]);
 
@@ -58,6 +60,8 @@ export function describeChord(chord: string, mac = false): string {
 		escape: 'Esc',
 		enter: 'Enter',
 		space: 'Space',
+		home: 'Home',
+		end: 'End',
 		plus: '+'
 	};
 	return normaliseChord(chord)

@@ -2,7 +2,7 @@
 import type { Tool } from './tool';
 import type { ToolId } from './tool-ids';
 import { PickTool } from './pick-tool';
-import { NodesTool } from './nodes-tool';
+import { PointsTool } from './points-tool';
 import { TurnTool } from './turn-tool';
 import { SizeTool } from './size-tool';
 import { ShapeTool } from './shape-tool';
@@ -20,7 +20,7 @@ const panTool: Tool = {
 export function createTools(): Record<ToolId, Tool> {
 	return {
 		pick: new PickTool(),
-		nodes: new NodesTool(),
+		points: new PointsTool(),
 		turn: new TurnTool(),
 		size: new SizeTool(),
 		box: new ShapeTool('box'),

@@ -1,12 +1,15 @@
 /**
- * The editor's tools, their plain names and their keys. Names are our own words.
+ * The editor's tools, their plain names and their keys. Names are our own words. Keys follow the
+ * rail: the digits 1–9 pick the tools in the order the rail shows them (the number is printed on
+ * each button); panning has no tool key — hold Space or drag with the middle button.
  */
 export type ToolId =
-	'pick' | 'nodes' | 'turn' | 'size' | 'box' | 'rounded' | 'oval' | 'polygon' | 'curve' | 'pan';
+	'pick' | 'points' | 'turn' | 'size' | 'box' | 'rounded' | 'oval' | 'polygon' | 'curve' | 'pan';
 
 export interface ToolInfo {
 	id: ToolId;
 	name: string;
+	/** Key that picks the tool (its place on the rail); empty for none. */
 	key: string;
 	hint: string;
 }
@@ -15,52 +18,52 @@ export const TOOLS: readonly ToolInfo[] = [
 	{
 		id: 'pick',
 		name: 'Pick',
-		key: 'V',
+		key: '1',
 		hint: 'Click to select, shift-click to add, drag to move or to draw a selection box'
 	},
 	{
-		id: 'nodes',
-		name: 'Nodes',
-		key: 'N',
+		id: 'points',
+		name: 'Points',
+		key: '2',
 		hint: 'Drag points and handles; double-click an edge to add a point; Delete removes points'
 	},
 	{
 		id: 'turn',
 		name: 'Turn',
-		key: 'R',
+		key: '3',
 		hint: 'Drag the round handle to rotate the selection; shift keeps 15° steps'
 	},
 	{
 		id: 'size',
 		name: 'Size',
-		key: 'S',
+		key: '4',
 		hint: 'Drag a square handle to resize; shift keeps proportions'
 	},
-	{ id: 'box', name: 'Box', key: 'B', hint: 'Drag to draw a rectangle' },
+	{ id: 'box', name: 'Box', key: '5', hint: 'Drag to draw a rectangle' },
 	{
 		id: 'rounded',
 		name: 'Rounded',
-		key: 'U',
+		key: '6',
 		hint: 'Drag to draw a rectangle with rounded corners'
 	},
-	{ id: 'oval', name: 'Oval', key: 'O', hint: 'Drag to draw an ellipse; shift for a circle' },
+	{ id: 'oval', name: 'Oval', key: '7', hint: 'Drag to draw an ellipse; shift for a circle' },
 	{
 		id: 'polygon',
 		name: 'Polygon',
-		key: 'G',
+		key: '8',
 		hint: 'Drag from the centre to draw a regular polygon'
 	},
 	{
 		id: 'curve',
 		name: 'Curve',
-		key: 'P',
+		key: '9',
 		hint: 'Click for corners, drag for smooth points; click the first point or press Enter to close'
 	},
 	{
 		id: 'pan',
 		name: 'Pan',
-		key: 'H',
-		hint: 'Drag to pan (or hold Space, or drag with the middle button)'
+		key: '',
+		hint: 'Drag to pan; anywhere, hold Space or drag with the middle button'
 	}
 ];
 

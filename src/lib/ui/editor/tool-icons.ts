@@ -3,7 +3,7 @@ import type { ToolId } from '$lib/editor/tools/tool-ids';
 
 export const TOOL_ICONS: Record<ToolId, string> = {
 	pick: 'M5 3 L5 16 L8.5 12.5 L11 18 L13 17 L10.5 11.5 L15 11.5 Z',
-	nodes: 'M3 15 C6 4 14 4 17 15 M1.5 13.5 h3 v3 h-3 Z M15.5 13.5 h3 v3 h-3 Z M8.5 3.5 h3 v3 h-3 Z',
+	points: 'M3 15 C6 4 14 4 17 15 M1.5 13.5 h3 v3 h-3 Z M15.5 13.5 h3 v3 h-3 Z M8.5 3.5 h3 v3 h-3 Z',
 	turn: 'M15.5 6 A7 7 0 1 0 17 11 M15.5 2 V6 H11.5',
 	size: 'M3 3 h6 v6 h-6 Z M11 11 h6 v6 h-6 Z M9 9 L11 11',
 	box: 'M3 5 h14 v10 h-14 Z',

@@ -1,5 +1,5 @@
 /**
- * Nodes: edit the points and Bezier handles of the selected electrodes. Click a point to select
+ * Points: edit the points and Bezier handles of the selected electrodes. Click a point to select
  * it (shift adds), drag points or handles (alt breaks a smooth point's handles apart), drag on
  * empty glass to box-select points, double-click an edge to add a point there, double-click a
  * point to switch it between corner and smooth, Delete removes the selected points.
@@ -40,8 +40,8 @@ type State =
 
 const REACH_px = 7;
 
-export class NodesTool implements Tool {
-	readonly id = 'nodes';
+export class PointsTool implements Tool {
+	readonly id = 'points';
 	#state: State = { name: 'idle' };
 
 	get state() {
