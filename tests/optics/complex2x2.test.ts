@@ -110,6 +110,9 @@ describe('complex 2×2 kernels', () => {
 		// E_x = (1+2i)(0.5−i) + (3+4i)(2+0.25i) = 2.5 + (5 + 8.75i) = 7.5 + 8.75i
 		expect(expected[0]).toBeCloseTo(7.5, 14);
 		expect(expected[1]).toBeCloseTo(8.75, 14);
+		// E_y = (5+6i)(0.5−i) + (7+8i)(2+0.25i) = (8.5 − 2i) + (12 + 17.75i) = 20.5 + 15.75i
+		expect(expected[2]).toBeCloseTo(20.5, 14);
+		expect(expected[3]).toBeCloseTo(15.75, 14);
 		const inPlace = Float64Array.from(v);
 		expect(Array.from(applyToVector(inPlace, m, inPlace))).toEqual(Array.from(expected));
 	});
