@@ -105,7 +105,9 @@ describe('Curve tool', () => {
 		expect(tool.points[2].out).toEqual([2, 2]);
 		expect(tool.points[2].in).toEqual([-2, -2]);
 		p.move(30.2, 30.1);
-		expect(h.editor.overlay.draft?.rubber).toBeDefined();
+		// The rubber band follows the pointer to the next point, before the click places it.
+		expect(h.editor.overlay.draft?.rubber).toEqual({ x: 30.2, y: 30.1 });
+		expect(h.editor.overlay.draft?.closed).toBe(false);
 		p.click(30.1, 30.1);
 		expect(tool.state).toBe('idle');
 		const e = last(h);

@@ -85,7 +85,8 @@ describe('Pick tool', () => {
 		const p = h.pointer(tool);
 		p.down(11, 11);
 		p.move(14.3, 11);
-		expect(h.editor.overlay.snap?.kind).toBeDefined();
+		// Square a's corner (10, 10) moved by 3.3 mm lands at 13.3; the 0.5 mm grid takes it to 13.5.
+		expect(h.editor.overlay.snap).toEqual({ kind: 'grid', point: { x: 13.5, y: 10 } });
 		expect(h.editor.overlay.readout?.text).toMatch(/^Δ /);
 		p.up(14.3, 11);
 		expect(h.editor.overlay.readout).toBeNull();

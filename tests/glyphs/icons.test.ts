@@ -31,7 +31,7 @@ describe('icon library', () => {
 			'unit-celsius',
 			'unit-percent'
 		]) {
-			expect(() => iconById(id)).not.toThrow();
+			expect(iconById(id).id).toBe(id);
 		}
 	});
 
@@ -79,7 +79,7 @@ describe('icon library', () => {
 		expect(() => generateIcon({ icon: 'nope', size_mm: 6 })).toThrow(/unknown icon/);
 	});
 
-	it('match golden SVG paths (battery gauge, warning sign; 24 mm box, 3 decimals)', () => {
+	it('regression guard: golden SVG paths (battery gauge, warning sign; 24 mm box, 3 decimals)', () => {
 		const battery = iconById('battery-gauge').build({ x_mm: 0, y_mm: 0, size_mm: 24 });
 		expect(battery.map((p) => `${p.key}: ${shapeToPathData(p, 3)}`)).toMatchInlineSnapshot(`
 			[

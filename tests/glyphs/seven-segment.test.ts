@@ -94,7 +94,7 @@ describe('7-segment digits', () => {
 		expect(Object.keys(outlines)).toEqual(['a', 'b', 'c', 'd', 'e', 'f', 'g']);
 	});
 
-	it('match golden SVG path data (pointed, slanted 8°, 3 decimals)', () => {
+	it('regression guard: golden SVG path data (pointed, slanted 8°, 3 decimals)', () => {
 		const g = generateSevenSegment({
 			x_mm: 1,
 			y_mm: 2,
@@ -120,7 +120,7 @@ describe('7-segment digits', () => {
 		`);
 	});
 
-	it('match golden SVG path data (round ends, upright)', () => {
+	it('regression guard: golden SVG path data (round ends, upright)', () => {
 		const g = generateSevenSegment({
 			height_mm: 8,
 			width_mm: 5,

@@ -103,7 +103,7 @@ describe('14- and 16-segment characters', () => {
 		}
 	});
 
-	it('match a golden SVG path (16-segment diagonal h, chamfered)', () => {
+	it('regression guard: golden SVG path (16-segment diagonal h, chamfered)', () => {
 		const g = generateStarburst(
 			{ height_mm: 12, width_mm: 8, stroke_mm: 1, gap_mm: 0.15, style: 'chamfered' },
 			{ count: 16 }
