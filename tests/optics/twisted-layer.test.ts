@@ -174,3 +174,26 @@ describe('retardation of a birefringent layer', () => {
 		expect(Math.abs(half - Math.PI)).toBeLessThan(1e-12);
 	});
 });
+
+describe('time convention, seen in intensities', () => {
+	it('a quarter-wave layer with its slow axis on x turns rotating light into linear light at +45°', () => {
+		// Physics without a convention (Hecht, Optics, 5th ed., §8.7, quarter-wave plates): a field
+		// E_x = cos ωt, E_y = sin ωt (turning from x toward y) whose x component is delayed by a
+		// quarter period becomes E_x = sin ωt = E_y, linear at +45°. In the layer's documented
+		// convention (E = Re{A·e^{+iωt}}) that field is A = (1, −i); the director (x) is the slow
+		// axis for Δn > 0. An analyzer at +45° then passes everything and one at −45° nothing; the
+		// opposite time convention in the code would swap the two.
+		const m = jonesOfTwistedLayer(createMatrix(), { twist_rad: 0, retardation_rad: Math.PI / 2 });
+		const out = applyToVector(createVector(), m, Float64Array.of(1, 0, 0, -1));
+		const through = (sign: 1 | -1) =>
+			((out[0] + sign * out[2]) ** 2 + (out[1] + sign * out[3]) ** 2) / 2 / 2;
+		checkAgainstReference({
+			label: 'analyzer at +45°, −45°',
+			source: 'Hecht, Optics, 5th ed., §8.7 (quarter-wave plate)',
+			actual: [through(1), through(-1)],
+			expected: [1, 0],
+			tolerance: 1e-15,
+			unit: 'transmittance'
+		});
+	});
+});
