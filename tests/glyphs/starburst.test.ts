@@ -61,6 +61,60 @@ describe('14- and 16-segment characters', () => {
 		);
 	});
 
+	it('every bar is one stroke wide and every bar-to-bar corner is exactly the gap (upright, all styles)', () => {
+		// Design intent, measured on the flattened outlines: bars meeting at a corner or a T leave
+		// exactly the requested gap; collinear neighbours and stems never come closer than it; the
+		// character spans the requested width and height; every bar is one stroke across.
+		const corners: Record<14 | 16, string[]> = {
+			14: ['a-f', 'a-b', 'd-c', 'd-e', 'g1-f', 'g1-e', 'g2-b', 'g2-c'],
+			16: ['a1-f', 'a2-b', 'd1-c', 'd2-e', 'g1-f', 'g1-e', 'g2-b', 'g2-c']
+		};
+		const apart: Record<14 | 16, string[]> = {
+			14: ['b-c', 'e-f', 'g1-g2', 'i-a', 'i-g1', 'i-g2', 'l-d', 'l-g1', 'l-g2'],
+			16: ['a1-a2', 'd1-d2', 'g1-g2', 'b-c', 'e-f', 'i-a1', 'i-a2', 'i-g1', 'i-g2', 'l-d1', 'l-d2']
+		};
+		const vertical = ['b', 'c', 'e', 'f', 'i', 'l'];
+		const horizontal: Record<14 | 16, string[]> = {
+			14: ['a', 'd', 'g1', 'g2'],
+			16: ['a1', 'a2', 'd1', 'd2', 'g1', 'g2']
+		};
+		const sizes = [
+			{ height_mm: 12, width_mm: 8, stroke_mm: 1, gap_mm: 0.15 },
+			{ height_mm: 9.3, width_mm: 7.1, stroke_mm: 0.7, gap_mm: 0.05 },
+			{ height_mm: 20, width_mm: 11, stroke_mm: 1.6, gap_mm: 0.3 }
+		];
+		for (const count of [14, 16] as const)
+			for (const style of ['pointed', 'chamfered', 'square', 'round'] as const)
+				for (const size of sizes) {
+					const g = generateStarburst({ ...size, style }, { count });
+					const part = Object.fromEntries(g.parts.map((p) => [p.key, p]));
+					const at = `${count}-segment ${style} ${size.height_mm} mm`;
+					const gap = (pair: string) => {
+						const [a, b] = pair.split('-');
+						return gapBetween(part[a], part[b]);
+					};
+					for (const pair of corners[count])
+						expect(Math.abs(gap(pair) - size.gap_mm), `${at} ${pair}`).toBeLessThanOrEqual(
+							TOLERANCE_mm
+						);
+					for (const pair of apart[count])
+						expect(gap(pair), `${at} ${pair}`).toBeGreaterThanOrEqual(size.gap_mm - TOLERANCE_mm);
+					for (const key of vertical)
+						expect(
+							Math.abs(widthAcross(part[key], { x: 0, y: 1 }) - size.stroke_mm),
+							`${at} ${key}`
+						).toBeLessThanOrEqual(TOLERANCE_mm);
+					for (const key of horizontal[count])
+						expect(
+							Math.abs(widthAcross(part[key], { x: 1, y: 0 }) - size.stroke_mm),
+							`${at} ${key}`
+						).toBeLessThanOrEqual(TOLERANCE_mm);
+					const b = shapesTightBounds(g.parts.filter((p) => p.key !== 'dp'));
+					expect(Math.abs(b.maxX - b.minX - size.width_mm), at).toBeLessThanOrEqual(TOLERANCE_mm);
+					expect(Math.abs(b.maxY - b.minY - size.height_mm), at).toBeLessThanOrEqual(TOLERANCE_mm);
+				}
+	});
+
 	it('diagonals touch the gap clearance of the bars around their cell', () => {
 		const g = generateStarburst(
 			{ height_mm: 12, width_mm: 8, stroke_mm: 1, gap_mm: 0.15 },
