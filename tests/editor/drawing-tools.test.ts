@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { ShapeTool, shapeForDrag } from '$lib/editor/tools/shape-tool';
 import { CurveTool } from '$lib/editor/tools/curve-tool';
 import { shapeTightBounds } from '$lib/core/geometry/tight-bounds';
+import { shapeArea } from '$lib/core/geometry/polygon';
 import { harness } from './fixtures';
 
 const last = (h: ReturnType<typeof harness>) => h.session.design.electrodes.at(-1)!;
@@ -85,7 +86,11 @@ describe('Box, Rounded, Oval and Polygon tools', () => {
 	it('rounded boxes use the corner radius', () => {
 		const h = harness(undefined, { cornerRadius_mm: 1 });
 		h.pointer(new ShapeTool('rounded')).drag([30, 30], [36, 34]);
-		expect(last(h).outline.some((p) => p.in || p.out)).toBe(true);
+		const e = last(h);
+		expect(shapeTightBounds(e)).toEqual({ minX: 30, minY: 30, maxX: 36, maxY: 34 });
+		// A 6 × 4 mm box with four quarter-circle corners of r = 1 mm: A = w·h − (4 − π)·r²
+		// = 24 − 0.858407 = 23.141593 mm² (the Bezier quarter circle is within 0.03 % of a true arc).
+		expect(Math.abs(shapeArea(e, { tolerance_um: 0.01 }) - 23.141593)).toBeLessThan(1e-3);
 	});
 });
 

@@ -42,7 +42,7 @@ describe('director statics: reference checks', () => {
 		expect(solution.convergence.status).toBe('converged');
 	});
 
-	it('onset of mid-plane tilt reproduces the analytic 90° TN and splay thresholds within 2 %', () => {
+	it('onset of mid-plane tilt reproduces the analytic 90° TN and splay thresholds within 0.1 %', () => {
 		// Analytic references: Schadt & Helfrich, APL 18:127 (1971) (90° TN) and Fréedericksz &
 		// Zolina, Trans. Faraday Soc. 29:919 (1933) (splay). The discrete solver's onset is found by
 		// extrapolating θ_m² linearly to zero just above threshold (zero pretilt, no dopant).
@@ -67,7 +67,9 @@ describe('director statics: reference checks', () => {
 			label: 'solver onset / analytic threshold − 1',
 			source: 'Schadt & Helfrich 1971; Fréedericksz & Zolina 1933',
 			unit: '(relative)',
-			tolerance: 0.02,
+			// Measured worst 3.4e-4 (60 slices, onset extrapolated from θ_m²); 1e-3 leaves room for
+			// the extrapolation's dependence on the probe voltages, not for a wrong threshold.
+			tolerance: 1e-3,
 			rows
 		});
 	});
