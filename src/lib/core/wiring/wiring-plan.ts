@@ -63,7 +63,7 @@ export function planWiring(design: Design, commons: number): WiringPlan {
 			slots.push({ line: lines.length - 1, taken: lockedOnLine.get(e.line)! });
 		}
 		const free = unit.members.filter((e) => !e.locked);
-		const perCommon = 1;
+		const perCommon = Math.max(1, Math.ceil(free.length / commons));
 		const budget = Math.ceil(unit.members.length / commons);
 		free.forEach((e: Electrode, rank) => {
 			const band = Math.min(commons - 1, Math.floor(rank / perCommon));
