@@ -10,6 +10,8 @@ import { runCheck } from './commands/check';
 import { runDemo } from './commands/demo';
 import { runCell } from './commands/cell';
 import { runIlluminant } from './commands/illuminant';
+import { runAssign } from './commands/assign';
+import { runPins } from './commands/pins';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -22,6 +24,8 @@ Commands:
   illuminant   X, Y, Z and x, y of a CIE illuminant's white
   check FILE   validate a design; check its wiring, drive and optics
   demo         write the demo design to stdout
+  assign FILE  wire a design automatically for N commons (--commons N [--out FILE])
+  pins FILE    pin map along the glass edge; --csv, --header (C) or --segments (CSV)
 
 Run "sunglyph <command> --help" for a command's options.`;
 
@@ -31,7 +35,9 @@ const COMMANDS: Record<string, Command> = {
 	cell: runCell,
 	illuminant: runIlluminant,
 	check: runCheck,
-	demo: runDemo
+	demo: runDemo,
+	assign: runAssign,
+	pins: runPins
 };
 
 const processIo: CliIo = {
