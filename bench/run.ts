@@ -16,6 +16,8 @@ import { indicesAt } from '../src/lib/core/lc/temperature';
 import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
 import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
 import { demoDesign } from '../src/lib/core/design/demo';
+import { autoAssign } from '../src/lib/core/commands/auto-assign';
+import { wiringBenchDesign } from './wiring-design';
 
 interface Row {
 	name: string;
@@ -114,6 +116,12 @@ const demo = demoDesign();
 rows.push(
 	measure('drive check of the demo design', null, 400, () => {
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
+	})
+);
+const wiringBench = wiringBenchDesign();
+rows.push(
+	measure('automatic wiring, 500 electrodes at 4 commons', 100, 100, () => {
+		autoAssign(wiringBench, { commons: 4 });
 	})
 );
 

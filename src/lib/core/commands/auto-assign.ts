@@ -62,13 +62,17 @@ export function autoAssign(design: Design, args: { commons: number }): Patch {
 		draft.commons.insert(commons);
 		draft.segmentLines.remove(design.segmentLines.map((l) => l.id));
 		draft.segmentLines.insert(lines);
-		for (const [id, place] of plan.assignments) {
+		// One pass over the electrodes (unchanged records keep their identity, so the patch lists
+		// only the rewired ones).
+		const wired = design.electrodes.map((e) => {
+			const place = plan.assignments.get(e.id);
+			if (!place) return e;
 			const common = commons[place.common].id;
 			const line = lines[place.line].id;
-			draft.electrodes.update(id, (e) =>
-				e.common === common && e.line === line ? e : { ...e, common, line }
-			);
-		}
+			return e.common === common && e.line === line ? e : { ...e, common, line };
+		});
+		draft.electrodes.remove(design.electrodes.map((e) => e.id));
+		draft.electrodes.insert(wired);
 		if (design.drive.commons !== n) draft.setField('drive', { ...design.drive, commons: n });
 	});
 }
