@@ -15,7 +15,7 @@ import { History } from '../../src/lib/core/commands/history';
 import { CommandError } from '../../src/lib/core/commands/command-error';
 import { crossingMatrix } from '../../src/lib/core/wiring/crossing-matrix';
 import { analyzeWiring } from '../../src/lib/core/drive/analyze-drive';
-import { analyzeDesign } from '../../src/lib/core/analyze-design';
+import { analyzeDesign, analyzeDesignWithCell } from '../../src/lib/core/analyze-design';
 import { electrode, emptyDesign, square } from '../commands/fixtures';
 
 const cleared = (): Design => {
@@ -49,6 +49,7 @@ describe('automatic wiring of the demo', () => {
 		expect(d.segmentLines).toHaveLength(14);
 		expect(analyzeWiring(d).findings.map((f) => f.code)).toEqual(['wiring.ok']);
 		expect(analyzeDesign(d).severity).not.toBe('fail');
+		expect(analyzeDesignWithCell(d).severity).not.toBe('fail');
 	});
 
 	it.each([
