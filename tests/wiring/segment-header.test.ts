@@ -171,3 +171,30 @@ describe('segment map CSV', () => {
 		expect(d2g[4]).toBe(`COM${Number(d2g[6]) + 1}`);
 	});
 });
+
+describe('header identifiers', () => {
+	const odd = (): Design => {
+		const demo = demoDesign();
+		return {
+			...demo,
+			electrodes: demo.electrodes.map((e, i) =>
+				i === 0 ? { ...e, name: 'Batt 1 */ x' } : i === 1 ? { ...e, name: 'Batt-1 */' } : e
+			)
+		};
+	};
+
+	it('are unique C identifiers, and odd names cannot end a comment early', () => {
+		const header = segmentHeader(odd());
+		const names = [...header.matchAll(/#define (LCD_E_\w+) \d+/g)].map((m) => m[1]);
+		expect(new Set(names).size).toBe(names.length);
+		expect(names).toContain('LCD_E_BATT_1_X');
+		expect(names).toContain('LCD_E_BATT_1');
+		for (const n of names) expect(n).toMatch(/^[A-Z_][A-Z0-9_]*$/);
+	});
+
+	const cc = compiler();
+	it.skipIf(!cc)('compile cleanly with odd electrode names', () => {
+		const lit = litByCompiledHeader(segmentHeader(odd()), cc!);
+		expect(lit.length).toBeGreaterThan(0);
+	});
+});

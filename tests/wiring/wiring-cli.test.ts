@@ -90,3 +90,17 @@ describe('sunglyph pins', () => {
 		expect(stderr).toContain('--csv');
 	});
 });
+
+describe('sunglyph check and the pin row', () => {
+	it('fails with exit 1 and a named finding when the pins do not fit the edge', async () => {
+		const demo = demoDesign();
+		// 18 pins at 4 mm need 72 mm; the demo's bottom edge is 66 mm.
+		const tight = { ...demo, pinout: { ...demo.pinout, pitch_mm: 4 } };
+		const { code, stdout } = await runCli(['check', 'd.json', '--json'], {
+			'd.json': serializeDesign(tight)
+		});
+		expect(code).toBe(1);
+		const codes = JSON.parse(stdout).wiring.findings.map((f: { code: string }) => f.code);
+		expect(codes).toContain('wiring.pins-do-not-fit');
+	});
+});
