@@ -19,6 +19,8 @@ import { demoDesign } from '../src/lib/core/design/demo';
 import { buildSpatialIndex } from '../src/lib/core/geometry/spatial-index';
 import { hitTest } from '../src/lib/core/geometry/hit-test';
 import { ellipseContour } from '../src/lib/core/geometry/primitive-shapes';
+import { autoAssign } from '../src/lib/core/commands/auto-assign';
+import { wiringBenchDesign } from './wiring-design';
 
 interface Row {
 	name: string;
@@ -117,6 +119,12 @@ const demo = demoDesign();
 rows.push(
 	measure('drive check of the demo design', null, 400, () => {
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
+	})
+);
+const wiringBench = wiringBenchDesign();
+rows.push(
+	measure('automatic wiring, 500 electrodes at 4 commons', 100, 100, () => {
+		autoAssign(wiringBench, { commons: 4 });
 	})
 );
 

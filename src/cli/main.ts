@@ -11,6 +11,8 @@ import { runDemo } from './commands/demo';
 import { runCell } from './commands/cell';
 import { runIlluminant } from './commands/illuminant';
 import { runReport } from './commands/report';
+import { runAssign } from './commands/assign';
+import { runPins } from './commands/pins';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -24,6 +26,8 @@ Commands:
   check FILE   validate a design; check its wiring, drive and optics
   report FILE  write the printable design report (HTML, or PDF with --pdf)
   demo         write the demo design to stdout
+  assign FILE  wire a design automatically for N commons (--commons N [--out FILE])
+  pins FILE    pin map along the glass edge; --csv, --header (C) or --segments (CSV)
 
 Run "sunglyph <command> --help" for a command's options.`;
 
@@ -34,7 +38,9 @@ const COMMANDS: Record<string, Command> = {
 	illuminant: runIlluminant,
 	check: runCheck,
 	report: runReport,
-	demo: runDemo
+	demo: runDemo,
+	assign: runAssign,
+	pins: runPins
 };
 
 const processIo: CliIo = {

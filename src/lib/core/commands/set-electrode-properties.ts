@@ -1,6 +1,7 @@
 /**
- * Sets name, kind, common and/or segment line of the selected electrodes (the property panel).
- * Omitted properties are left alone; null unassigns a common or line.
+ * Sets name, kind, common, segment line and/or the lock of the selected electrodes (the property
+ * panel). Omitted properties are left alone; null unassigns a common or line. A locked assignment
+ * is kept by automatic wiring.
  */
 import type { Design, ElectrodeKind } from '../design/schema';
 import { requireThat } from './command-error';
@@ -14,6 +15,7 @@ export interface ElectrodeProperties {
 	kind?: ElectrodeKind;
 	common?: string | null;
 	line?: string | null;
+	locked?: boolean;
 }
 
 export function setElectrodeProperties(
@@ -29,8 +31,10 @@ export function setElectrodeProperties(
 			args.kind === 'segment' || args.kind === 'icon',
 			`unknown electrode kind "${args.kind}"`
 		);
+	if (args.locked !== undefined)
+		requireThat(typeof args.locked === 'boolean', 'locked: expected true or false');
 	const changes: ElectrodeProperties = {};
-	for (const key of ['name', 'kind', 'common', 'line'] as const) {
+	for (const key of ['name', 'kind', 'common', 'line', 'locked'] as const) {
 		if (args[key] !== undefined) (changes as Record<string, unknown>)[key] = args[key];
 	}
 	return editDesign(design, (draft) => {

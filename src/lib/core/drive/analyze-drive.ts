@@ -15,6 +15,7 @@ import { thresholdsOverRange, type ThresholdPoint } from './threshold-at-tempera
 import { windowFindings } from './drive-verdict';
 import { finding, overallSeverity, type Finding, type Severity } from '../findings/finding';
 import { pinMap, type PinMap } from './pin-map';
+import { pinFitFindings } from '../wiring/pin-fit';
 
 /** Frame rates outside this range flicker or waste power [common practice: 30–200 Hz]. */
 export const FRAME_RATE_RANGE_HZ = { min: 30, max: 200 } as const;
@@ -133,7 +134,7 @@ export function analyzeWiring(design: Design): WiringReport {
 				severity: 'fail',
 				message: `${conflict.electrodes.join(', ')} share common ${conflict.common} and line ${conflict.line}; they would always switch together.`,
 				fix: 'Move all but one of them to a free (common, line) crossing.',
-				electrodes: conflict.electrodes
+				electrodes: conflict.electrodeIds
 			})
 		);
 	}
@@ -144,7 +145,7 @@ export function analyzeWiring(design: Design): WiringReport {
 				severity: 'fail',
 				message: `Not assigned to a common and a line: ${pins.unassigned.join(', ')}.`,
 				fix: 'Assign each to a common and a segment line, by hand or automatically.',
-				electrodes: pins.unassigned
+				electrodes: pins.unassignedIds
 			})
 		);
 	}
@@ -158,6 +159,7 @@ export function analyzeWiring(design: Design): WiringReport {
 			})
 		);
 	}
+	findings.push(...pinFitFindings(design));
 	if (findings.length === 0) {
 		findings.push(
 			finding({

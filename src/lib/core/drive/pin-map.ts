@@ -8,7 +8,10 @@ import type { Design } from '../design/schema';
 export interface PinConflict {
 	common: string;
 	line: string;
+	/** Names of the electrodes (for messages). */
 	electrodes: string[];
+	/** Their ids (for findings and selection). */
+	electrodeIds: string[];
 }
 
 export interface PinMap {
@@ -19,18 +22,25 @@ export interface PinMap {
 	conflicts: PinConflict[];
 	/** Names of electrodes that lack a common or a line. */
 	unassigned: string[];
+	/** Ids of the same electrodes. */
+	unassignedIds: string[];
 	/** Commons that carry electrodes but lie beyond the drive's common count. */
 	commonsBeyondDrive: string[];
 }
 
 export function pinMap(design: Design): PinMap {
-	const byCrossing = new Map<string, { common: string; line: string; electrodes: string[] }>();
+	const byCrossing = new Map<
+		string,
+		{ common: string; line: string; electrodes: string[]; electrodeIds: string[] }
+	>();
 	const unassigned: string[] = [];
+	const unassignedIds: string[] = [];
 	const linesUsed = new Set<string>();
 	const commonsUsed = new Set<string>();
 	for (const electrode of design.electrodes) {
 		if (electrode.common === null || electrode.line === null) {
 			unassigned.push(electrode.name || electrode.id);
+			unassignedIds.push(electrode.id);
 			continue;
 		}
 		linesUsed.add(electrode.line);
@@ -39,9 +49,11 @@ export function pinMap(design: Design): PinMap {
 		const entry = byCrossing.get(key) ?? {
 			common: electrode.common,
 			line: electrode.line,
-			electrodes: []
+			electrodes: [],
+			electrodeIds: []
 		};
 		entry.electrodes.push(electrode.name || electrode.id);
+		entry.electrodeIds.push(electrode.id);
 		byCrossing.set(key, entry);
 	}
 	const conflicts = [...byCrossing.values()].filter((entry) => entry.electrodes.length > 1);
@@ -58,9 +70,11 @@ export function pinMap(design: Design): PinMap {
 		conflicts: conflicts.map((c) => ({
 			common: nameOfCommon.get(c.common) ?? c.common,
 			line: nameOfLine.get(c.line) ?? c.line,
-			electrodes: c.electrodes
+			electrodes: c.electrodes,
+			electrodeIds: c.electrodeIds
 		})),
 		unassigned,
+		unassignedIds,
 		commonsBeyondDrive
 	};
 }
