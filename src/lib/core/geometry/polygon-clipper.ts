@@ -142,6 +142,8 @@ export function offsetRegion(
 		miterLimit?: number;
 		arcTolerance_um?: number;
 		fill?: FillRule;
+		/** The rings are already clean (outer positive, holes negative, none crossing): skip the clean-up. */
+		clean?: boolean;
 	}
 ): Float64Array[] {
 	if (!Number.isFinite(options.delta_mm)) {
@@ -149,7 +151,7 @@ export function offsetRegion(
 	}
 	const arcTolerance_um = options.arcTolerance_um ?? DEFAULT_ARC_TOLERANCE_um;
 	if (!(arcTolerance_um > 0)) throw new RangeError('arcTolerance_um must be above 0');
-	const clean = normalizeRegion(region, { fill: options.fill });
+	const clean = options.clean ? region : normalizeRegion(region, { fill: options.fill });
 	const offset = new ClipperLib.ClipperOffset(
 		options.miterLimit ?? DEFAULT_MITER_LIMIT,
 		(arcTolerance_um / 1000) * CLIP_UNITS_PER_mm

@@ -32,10 +32,17 @@ function segmentsMeet(p: number[], q: number[]): boolean {
 	return o4 === 0 && onSegment(cx, cy, dx, dy, bx, by);
 }
 
-/** Neighbouring edges a→b, b→c fold back when c lies on a→b beyond b's turn (a spike). */
-function foldsBack(a: number[], c: number[], b: number[]): boolean {
-	if (orient(a[0], a[1], b[0], b[1], c[0], c[1]) !== 0) return false;
-	return (b[0] - a[0]) * (c[0] - b[0]) + (b[1] - a[1]) * (c[1] - b[1]) < 0;
+/** Neighbouring edges a→b, b→c fold back when c lies on the line a→b and the path turns back. */
+function foldsBack(
+	ax: number,
+	ay: number,
+	bx: number,
+	by: number,
+	cx: number,
+	cy: number
+): boolean {
+	if (orient(ax, ay, bx, by, cx, cy) !== 0) return false;
+	return (bx - ax) * (cx - bx) + (by - ay) * (cy - by) < 0;
 }
 
 /**
@@ -54,26 +61,19 @@ export function ringSelfCrossings(ring: Float64Array, options: { limit?: number 
 	const found: XY[] = [];
 	const at = (x: number, y: number) => ({ x: x / CLIP_UNITS_PER_mm, y: y / CLIP_UNITS_PER_mm });
 	for (let i = 0; i < n && found.length < limit; i++) {
-		const a = [path[i].X, path[i].Y];
-		const b = [path[(i + 1) % n].X, path[(i + 1) % n].Y];
-		const c = [path[(i + 2) % n].X, path[(i + 2) % n].Y];
-		if (foldsBack(a, c, b)) found.push(at(b[0], b[1]));
+		const e = edges[i];
+		const f = edges[(i + 1) % n];
+		if (foldsBack(e[0], e[1], e[2], e[3], f[2], f[3])) found.push(at(e[2], e[3]));
 	}
-	const order = edges
-		.map((_, i) => i)
-		.sort((i, j) => Math.min(edges[i][0], edges[i][2]) - Math.min(edges[j][0], edges[j][2]));
-	const active: number[] = [];
+	const left = edges.map((e) => Math.min(e[0], e[2]));
+	const order = edges.map((_, i) => i).sort((i, j) => left[i] - left[j]);
+	let active: number[] = [];
 	for (const i of order) {
 		const e = edges[i];
-		const left = Math.min(e[0], e[2]);
-		for (let k = active.length - 1; k >= 0; k--) {
-			const f = edges[active[k]];
-			if (Math.max(f[0], f[2]) < left) active.splice(k, 1);
-		}
+		active = active.filter((j) => Math.max(edges[j][0], edges[j][2]) >= left[i]);
 		for (const j of active) {
 			if (found.length >= limit) return found;
-			const adjacent = (i + 1) % n === j || (j + 1) % n === i;
-			if (adjacent) continue;
+			if ((i + 1) % n === j || (j + 1) % n === i) continue;
 			const f = edges[j];
 			if (Math.max(e[1], e[3]) < Math.min(f[1], f[3])) continue;
 			if (Math.max(f[1], f[3]) < Math.min(e[1], e[3])) continue;
