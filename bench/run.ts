@@ -16,6 +16,8 @@ import { indicesAt } from '../src/lib/core/lc/temperature';
 import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
 import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
 import { demoDesign } from '../src/lib/core/design/demo';
+import { checkDesignRules } from '../src/lib/core/rules/check-design-rules';
+import { largeDesign } from './large-design';
 
 interface Row {
 	name: string;
@@ -114,6 +116,12 @@ const demo = demoDesign();
 rows.push(
 	measure('drive check of the demo design', null, 400, () => {
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
+	})
+);
+const large = largeDesign(500);
+rows.push(
+	measure('design-rule check, 500 electrodes (62 digits + bars)', 100, 40, () => {
+		checkDesignRules(large);
 	})
 );
 
