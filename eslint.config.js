@@ -55,6 +55,10 @@ export default ts.config(
 							group: ['paper', 'paper/*', 'd3', 'd3-*', '@observablehq/*'],
 							message:
 								'core/ must not import view libraries (paper.js only in geometry/paper-kernel.ts).'
+						},
+						{
+							group: ['clipper-lib'],
+							message: 'clipper-lib only in geometry/polygon-clipper.ts.'
 						}
 					]
 				}
@@ -64,6 +68,11 @@ export default ts.config(
 	{
 		// The one place the core uses paper.js: as a headless geometry kernel for curve booleans.
 		files: ['src/lib/core/geometry/paper-kernel.ts'],
+		rules: { 'no-restricted-imports': 'off' }
+	},
+	{
+		// The one place the core uses the integer clipping library: robust booleans and offsets.
+		files: ['src/lib/core/geometry/polygon-clipper.ts'],
 		rules: { 'no-restricted-imports': 'off' }
 	}
 );

@@ -21,6 +21,8 @@ import { hitTest } from '../src/lib/core/geometry/hit-test';
 import { ellipseContour } from '../src/lib/core/geometry/primitive-shapes';
 import { autoAssign } from '../src/lib/core/commands/auto-assign';
 import { wiringBenchDesign } from './wiring-design';
+import { checkDesignRules } from '../src/lib/core/rules/check-design-rules';
+import { largeDesign } from './large-design';
 
 interface Row {
 	name: string;
@@ -147,6 +149,13 @@ rows.push(
 	measure('spatial index: 320 curved electrodes, build + 1000 hit tests', 50, 30, () => {
 		const index = buildSpatialIndex(curvedElectrodes);
 		for (let k = 0; k < 1000; k++) hitTest(index, { x: (k * 7.3) % 100, y: (k * 3.1) % 80 }, 0.2);
+	})
+);
+
+const large = largeDesign(500);
+rows.push(
+	measure('design-rule check, 500 electrodes (62 digits + bars)', 100, 40, () => {
+		checkDesignRules(large);
 	})
 );
 

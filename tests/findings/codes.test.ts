@@ -7,7 +7,12 @@ import type { Design } from '../../src/lib/core/design/schema';
 /** Every finding an analysis reports must carry a registered, documented code. */
 function allFindings(design: Design) {
 	const report = analyzeDesignWithCell(design);
-	return [...report.wiring.findings, ...report.drive.findings, ...report.opticsFindings];
+	return [
+		...report.wiring.findings,
+		...report.drive.findings,
+		...report.opticsFindings,
+		...report.rules.findings
+	];
 }
 
 describe('finding codes', () => {
@@ -27,9 +32,11 @@ describe('finding codes', () => {
 			drive: { ...demo.drive, amplitude_V: 1, frameRate_Hz: 10, biasDivisor: 2 },
 			electrodes: demo.electrodes.map((e, i) => (i < 2 ? { ...e, common: null } : e))
 		};
-		const findings = [...allFindings(demo), ...allFindings(failing)];
+		const empty: Design = { ...demo, electrodes: [], groups: [] };
+		const findings = [...allFindings(demo), ...allFindings(failing), ...allFindings(empty)];
 		expect(findings.map((f) => f.code)).toContain('wiring.unassigned');
 		expect(findings.map((f) => f.code)).toContain('drive.amplitude-too-low');
+		expect(findings.map((f) => f.code)).toContain('rule.empty-design');
 		for (const f of findings) expect(isKnownFindingCode(f.code), f.code).toBe(true);
 		for (const f of findings.filter((x) => x.severity !== 'pass')) expect(f.fix).not.toBe('');
 	});

@@ -15,8 +15,9 @@ export const CAUTION =
 
 export const CHECK_HELP = `Usage: sunglyph check <design.json> [--json]
 
-Validates a design file and checks its wiring and multiplexed drive over the operating
-temperature range.
+Validates a design file and checks its wiring, its geometry against the design rules
+(overlaps, gaps, widths, outlines, placement on the glass, character size) and its
+multiplexed drive over the operating temperature range.
 
 Exit status: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input.
 
@@ -59,6 +60,8 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 	} else {
 		const lines = [`${parsed.design.name}`, '', 'Wiring'];
 		for (const f of report.wiring.findings) lines.push(...findingLines(f).map((l) => `  ${l}`));
+		lines.push('', 'Rules');
+		for (const f of report.rules.findings) lines.push(...findingLines(f).map((l) => `  ${l}`));
 		lines.push('', 'Drive');
 		lines.push(
 			...driveReportLines(report.drive, { withCell: true })

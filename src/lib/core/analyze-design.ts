@@ -15,6 +15,7 @@ import {
 } from './drive/analyze-drive';
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
+import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -25,6 +26,8 @@ export interface DesignReport {
 	cellError: string | null;
 	/** Findings about the optics: the cell's own, a failed model, entered values the model disputes. */
 	opticsFindings: Finding[];
+	/** The design-rule check of the geometry and of what the design uses. */
+	rules: RulesReport;
 	/** Where the drive check's V10/V90 came from. */
 	thresholdSource: 'entered' | 'cell model';
 	severity: Severity;
@@ -42,6 +45,7 @@ export function analyzeDesign(
 		drive: design.drive,
 		thresholds: useModel ? cell.thresholds : design.thresholds
 	});
+	const rules = checkDesignRules(design);
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
@@ -66,8 +70,14 @@ export function analyzeDesign(
 		cell,
 		cellError,
 		opticsFindings: cellFindings,
+		rules,
 		thresholdSource: useModel ? 'cell model' : 'entered',
-		severity: overallSeverity([...wiring.findings, ...drive.findings, ...cellFindings])
+		severity: overallSeverity([
+			...wiring.findings,
+			...drive.findings,
+			...cellFindings,
+			...rules.findings
+		])
 	};
 }
 

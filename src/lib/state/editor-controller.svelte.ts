@@ -219,6 +219,28 @@ export class EditorController implements ActionEnv {
 			maxY: cy + span * 2
 		});
 	}
+	/** Selects a finding's electrodes and zooms to its location (or to them), with some context. */
+	showFinding(request: {
+		electrodes: readonly string[];
+		location?: { x_mm: number; y_mm: number; width_mm: number; height_mm: number };
+	}) {
+		const present = idSet(this.design.electrodes.map((e) => e.id));
+		this.editor.select(request.electrodes.filter((id) => present.has(id)));
+		const at = request.location;
+		const b = at
+			? { minX: at.x_mm, minY: at.y_mm, maxX: at.x_mm + at.width_mm, maxY: at.y_mm + at.height_mm }
+			: this.ctx.selectionBounds();
+		if (!b) return;
+		const span = Math.max(b.maxX - b.minX, b.maxY - b.minY, 4);
+		const cx = (b.minX + b.maxX) / 2;
+		const cy = (b.minY + b.maxY) / 2;
+		this.editor.fit({
+			minX: cx - span * 0.75,
+			minY: cy - span * 0.75,
+			maxX: cx + span * 0.75,
+			maxY: cy + span * 0.75
+		});
+	}
 	toggleViewMode() {
 		this.editor.viewMode = this.editor.viewMode === 'wiring' ? 'appearance' : 'wiring';
 	}

@@ -4,13 +4,18 @@
  */
 import { DRIVE_AND_OPTICS_CODES } from './codes-drive-optics';
 import { WIRING_CODES } from './codes-wiring';
+import { RULE_CODES } from './codes-rules';
 
 export interface FindingCode {
 	code: string;
 	meaning: string;
 }
 
-export const FINDING_CODES: readonly FindingCode[] = [...DRIVE_AND_OPTICS_CODES, ...WIRING_CODES];
+export const FINDING_CODES: readonly FindingCode[] = [
+	...DRIVE_AND_OPTICS_CODES,
+	...WIRING_CODES,
+	...RULE_CODES
+];
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));
 
