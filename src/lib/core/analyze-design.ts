@@ -15,6 +15,7 @@ import {
 } from './drive/analyze-drive';
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
+import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-legibility';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -27,6 +28,8 @@ export interface DesignReport {
 	opticsFindings: Finding[];
 	/** Where the drive check's V10/V90 came from. */
 	thresholdSource: 'entered' | 'cell model';
+	/** Every light scenario judged; null until the cell report exists. */
+	legibility: LegibilityReport | null;
 	severity: Severity;
 }
 
@@ -54,6 +57,7 @@ export function analyzeDesign(
 				fix: "Check the cell's fluid, gap and temperature range."
 			})
 		);
+	const legibility = cell ? analyzeLegibility({ design, cell }) : null;
 	return {
 		design: {
 			name: design.name,
@@ -67,7 +71,13 @@ export function analyzeDesign(
 		cellError,
 		opticsFindings: cellFindings,
 		thresholdSource: useModel ? 'cell model' : 'entered',
-		severity: overallSeverity([...wiring.findings, ...drive.findings, ...cellFindings])
+		legibility,
+		severity: overallSeverity([
+			...wiring.findings,
+			...drive.findings,
+			...cellFindings,
+			...(legibility?.findings ?? [])
+		])
 	};
 }
 

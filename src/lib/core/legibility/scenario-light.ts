@@ -39,6 +39,8 @@ export interface LitState {
 	lab: Lab;
 	hex: string;
 	inGamut: boolean;
+	/** Encoded sRGB before clamping (0…1 in gamut). */
+	rgb: { r: number; g: number; b: number };
 }
 
 export interface ScenarioLight extends Record<StateName, LitState> {
@@ -104,7 +106,8 @@ export function scenarioLight(options: {
 			xyz_cdm2,
 			lab: xyzToLab(relative, white),
 			hex: preview.hex,
-			inGamut: preview.inGamut
+			inGamut: preview.inGamut,
+			rgb: { r: preview.r, g: preview.g, b: preview.b }
 		};
 	};
 	return {
