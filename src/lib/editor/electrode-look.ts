@@ -11,7 +11,12 @@ export interface LookInputs {
 	colourOfCommon: (index: number) => string;
 	selection: ReadonlySet<string>;
 	hoverId: string | null;
-	appearance: { background: string; segmentOn: string; litIds?: ReadonlySet<string> } | null;
+	appearance: {
+		background: string;
+		segmentOn: string;
+		segmentOff?: string;
+		litIds?: ReadonlySet<string>;
+	} | null;
 }
 
 export const SELECTED_OUTLINE = '#101418';
@@ -29,7 +34,7 @@ export function electrodeLook(e: Electrode, inputs: LookInputs): ElectrodeLook {
 		const a = inputs.appearance;
 		const lit = !a.litIds || a.litIds.has(e.id);
 		return {
-			fill: lit ? a.segmentOn : a.background,
+			fill: lit ? a.segmentOn : (a.segmentOff ?? a.background),
 			opacity: 1,
 			...(outline ?? { stroke: null, strokeWidth_px: 0, dash: null })
 		};
