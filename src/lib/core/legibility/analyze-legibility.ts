@@ -9,7 +9,7 @@ import { observerName } from '../cell/cell-optics';
 import { finding, overallSeverity, type Finding, type Severity } from '../findings/finding';
 import { assessScenario, type ScenarioAssessment } from './assess-scenario';
 import { characterGroups, type CharacterGroup } from './character-groups';
-import { safetyCaution, scenarioFindings } from './legibility-findings';
+import { mergeGhostFindings, safetyCaution, scenarioFindings } from './legibility-findings';
 import { PUBLISHED_LIMITS, type PublishedLimit } from './legibility-limits';
 import { scenarioLight, type ScenarioLight } from './scenario-light';
 import type { Scenario } from '../design/legibility-schema';
@@ -76,7 +76,7 @@ export function analyzeLegibility(options: {
 				settings
 			})
 		);
-	const findings: Finding[] = [];
+	let findings: Finding[] = [];
 	if (groups.length === 0) {
 		findings.push(
 			finding({
@@ -86,7 +86,9 @@ export function analyzeLegibility(options: {
 				fix: 'Place digits with the character generator so their height and stroke are known.'
 			})
 		);
-	} else for (const s of scenarios) findings.push(...scenarioFindings(s));
+	} else {
+		findings = mergeGhostFindings(scenarios.flatMap(scenarioFindings), scenarios);
+	}
 	if (settings.safetyRelevant) findings.push(safetyCaution());
 	return {
 		temperature_C: states.temperature_C,

@@ -96,7 +96,7 @@ function contrastReason(cr: number, crBare: number): Reason | null {
 		? crBare >= CONTRAST_RATIO_MIN.value
 		: crBare >= CONTRAST_RATIO_RECOMMENDED.value;
 	const limit = fail ? CONTRAST_RATIO_MIN : CONTRAST_RATIO_RECOMMENDED;
-	const text = `${glare ? 'washed out by glare' : 'weak contrast'}: ${cr.toFixed(2)}:1 (${crBare.toFixed(1)}:1 without the front-surface veil; ${fail ? 'minimum' : 'recommended'} ${limit.value}:1, ${limit.source})`;
+	const text = `${glare ? (fail ? 'washed out by glare' : 'glare lowers the contrast') : 'weak contrast'}: ${cr.toFixed(2)}:1 (${crBare.toFixed(1)}:1 without the front-surface veil; ${fail ? 'minimum' : 'recommended'} ${limit.value}:1, ${limit.source})`;
 	if (glare)
 		return {
 			code: fail ? 'legibility.washed-out' : 'legibility.glare',
@@ -148,7 +148,7 @@ export function assessScenario(options: {
 			? {
 					code: 'legibility.ghosts-visible',
 					severity: 'warn',
-					text: `ghosts visible: off segments differ from the background by ΔE00 ${deltaE00Ghost.toFixed(1)} (${GHOST_DELTA_E00.source})`,
+					text: `ghosts visible: off segments differ from the background by ΔE00 ${deltaE00Ghost.toFixed(1)} (limit ${GHOST_DELTA_E00.value}, ${GHOST_DELTA_E00.source})`,
 					fix: 'Lower the drive amplitude, a steeper fluid, or fewer commons.'
 				}
 			: null;

@@ -47,14 +47,47 @@ export function scenarioFindings(assessment: ScenarioAssessment): Finding[] {
 			})
 		];
 	}
+	const everyGroup = (groups: string[]) =>
+		groups.length > 1 && groups.length === assessment.groups.length
+			? `all ${groups.length} character groups`
+			: groups.join(', ');
 	return [...byCode.entries()].map(([code, e]) =>
 		finding({
 			code,
 			severity: e.severity,
-			message: `${name}: ${e.groups.join(', ')} ${e.severity === 'fail' ? 'not readable' : 'marginal'}, ${e.texts[0]}.`,
+			message: `${name}: ${everyGroup(e.groups)} ${e.severity === 'fail' ? 'not readable' : 'marginal'}, ${e.texts[0]}.`,
 			fix: e.fix,
 			electrodes: [...new Set(e.electrodes)]
 		})
+	);
+}
+
+/**
+ * Ghosting is a property of the cell and drive more than of the light: one finding lists every
+ * scenario where off segments stand out, with the range of ΔE00, instead of one per scenario.
+ */
+export function mergeGhostFindings(
+	findings: readonly Finding[],
+	assessments: readonly ScenarioAssessment[]
+): Finding[] {
+	const ghosts = findings.filter((f) => f.code === 'legibility.ghosts-visible');
+	if (ghosts.length <= 1) return [...findings];
+	const hit = assessments.filter((a) =>
+		a.groups.some((g) => g.reasons.some((r) => r.code === 'legibility.ghosts-visible'))
+	);
+	const values = hit.map((a) => a.deltaE00Ghost);
+	const merged = finding({
+		code: 'legibility.ghosts-visible',
+		severity: 'warn',
+		message:
+			`Off segments stand out from the background by ΔE00 ${Math.min(...values).toFixed(1)}–${Math.max(...values).toFixed(1)} ` +
+			`in ${hit.map((a) => a.scenario.name).join(', ')} (limit 1, common practice: a just-noticeable difference): ghosts visible.`,
+		fix: ghosts[0].fix,
+		electrodes: [...new Set(ghosts.flatMap((f) => f.electrodes))]
+	});
+	const first = findings.indexOf(ghosts[0]);
+	return findings.flatMap((f, i) =>
+		i === first ? [merged] : f.code === 'legibility.ghosts-visible' ? [] : [f]
 	);
 }
 

@@ -35,7 +35,7 @@ export const CONTRAST_RATIO_RECOMMENDED: PublishedLimit = {
 export const GHOST_DELTA_E00: PublishedLimit = {
 	value: 1,
 	unit: 'ΔE00',
-	source: 'common practice (just-noticeable difference ≈ 1 ΔE00)'
+	source: 'common practice: a just-noticeable difference'
 };
 
 export const PUBLISHED_LIMITS = [
