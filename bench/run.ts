@@ -16,6 +16,9 @@ import { indicesAt } from '../src/lib/core/lc/temperature';
 import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
 import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
 import { demoDesign } from '../src/lib/core/design/demo';
+import { analyzeCell as cellReportOf } from '../src/lib/core/cell/analyze-cell';
+import { analyzeLegibility } from '../src/lib/core/legibility/analyze-legibility';
+import { legibilityMap } from '../src/lib/core/legibility/legibility-map';
 
 interface Row {
 	name: string;
@@ -114,6 +117,27 @@ const demo = demoDesign();
 rows.push(
 	measure('drive check of the demo design', null, 400, () => {
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
+	})
+);
+const demoCell = cellReportOf(demo);
+const legibility = analyzeLegibility({ design: demo, cell: demoCell });
+rows.push(
+	measure('legibility: every scenario of the demo, given the cell report', 5, 200, () => {
+		analyzeLegibility({ design: demo, cell: demoCell });
+	})
+);
+rows.push(
+	measure('legibility map, 48 × 24 points', 50, 200, () => {
+		const office = legibility.scenarios[1];
+		legibilityMap({
+			scenario: office.scenario,
+			light: office.light,
+			frontSurfaceReflectance: demo.cell.frontSurfaceReflectance,
+			groups: legibility.groups,
+			settings: demo.legibility,
+			columns: 48,
+			rows: 24
+		});
 	})
 );
 
