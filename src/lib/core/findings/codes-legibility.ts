@@ -22,7 +22,6 @@ export const LEGIBILITY_CODES: readonly FindingCode[] = [
 	{ code: 'legibility.low-visibility', meaning: 'visibility level under the reading factor' },
 	{ code: 'legibility.ghosts-visible', meaning: 'off segments stand out from the background' },
 	{ code: 'legibility.no-characters', meaning: 'no character group to judge legibility on' },
-	{ code: 'legibility.unavailable', meaning: 'legibility waits for the cell model' },
 	{
 		code: 'legibility.safety-caution',
 		meaning: 'a safety-relevant readout: confirm with measured samples and the applicable standards'
