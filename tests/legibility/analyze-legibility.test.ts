@@ -136,6 +136,29 @@ describe('legibility of the demo readout', () => {
 		expect(map.readable.slice(19 * 40, 20 * 40).every((v) => v === 0)).toBe(true);
 	});
 
+	it('reads at night only with the backlight of a transflective night case', () => {
+		const night = {
+			...byName('Dim room').scenario,
+			name: 'night',
+			illuminance_lx: 0.05,
+			mirrored_cdm2: 0.01
+		};
+		const thin = withDigits(demo, 4, 1000);
+		const design = (backlight_cdm2?: number) => ({
+			...thin,
+			legibility: {
+				...thin.legibility,
+				scenarios: [{ ...night, distance_mm: 1000, backlight_cdm2 }]
+			}
+		});
+		const dark = analyzeLegibility({ design: design(), cell }).scenarios[0];
+		const lit = analyzeLegibility({ design: design(20), cell }).scenarios[0];
+		expect(dark.light.background.luminance_cdm2).toBeLessThan(0.02);
+		expect(lit.light.background.luminance_cdm2).toBeGreaterThan(20);
+		expect(lit.groups[0].visibilityLevel).toBeGreaterThan(10 * dark.groups[0].visibilityLevel);
+		expect(lit.light.on.luminance_cdm2).toBeLessThan(lit.light.off.luminance_cdm2);
+	});
+
 	it('judges the cold and hot ends from their own cell states', () => {
 		const cold = analyzeLegibility({ design: demo, cell, end: 'cold' });
 		const hot = analyzeLegibility({ design: demo, cell, end: 'hot' });
