@@ -23,6 +23,9 @@ import { autoAssign } from '../src/lib/core/commands/auto-assign';
 import { wiringBenchDesign } from './wiring-design';
 import { checkDesignRules } from '../src/lib/core/rules/check-design-rules';
 import { largeDesign } from './large-design';
+import { analyzeCell as cellReportOf } from '../src/lib/core/cell/analyze-cell';
+import { analyzeLegibility } from '../src/lib/core/legibility/analyze-legibility';
+import { legibilityMap } from '../src/lib/core/legibility/legibility-map';
 
 interface Row {
 	name: string;
@@ -156,6 +159,28 @@ const large = largeDesign(500);
 rows.push(
 	measure('design-rule check, 500 electrodes (62 digits + bars)', 100, 40, () => {
 		checkDesignRules(large);
+	})
+);
+
+const demoCell = cellReportOf(demo);
+const legibility = analyzeLegibility({ design: demo, cell: demoCell });
+rows.push(
+	measure('legibility: every scenario of the demo, given the cell report', 5, 200, () => {
+		analyzeLegibility({ design: demo, cell: demoCell });
+	})
+);
+rows.push(
+	measure('legibility map, 48 × 24 points', 50, 200, () => {
+		const office = legibility.scenarios[1];
+		legibilityMap({
+			scenario: office.scenario,
+			light: office.light,
+			frontSurfaceReflectance: demo.cell.frontSurfaceReflectance,
+			groups: legibility.groups,
+			settings: demo.legibility,
+			columns: 48,
+			rows: 24
+		});
 	})
 );
 

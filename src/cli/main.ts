@@ -13,6 +13,7 @@ import { runIlluminant } from './commands/illuminant';
 import { runReport } from './commands/report';
 import { runAssign } from './commands/assign';
 import { runPins } from './commands/pins';
+import { runLegibility } from './commands/legibility';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -25,6 +26,7 @@ Commands:
   illuminant   X, Y, Z and x, y of a CIE illuminant's white
   check FILE   validate a design; check its wiring, drive and optics
   report FILE  write the printable design report (HTML, or PDF with --pdf)
+  legibility FILE  light scenarios, contrast with glare, visual angle, threshold, verdicts
   demo         write the demo design to stdout
   assign FILE  wire a design automatically for N commons (--commons N [--out FILE])
   pins FILE    pin map along the glass edge; --csv, --header (C) or --segments (CSV)
@@ -40,7 +42,8 @@ const COMMANDS: Record<string, Command> = {
 	report: runReport,
 	demo: runDemo,
 	assign: runAssign,
-	pins: runPins
+	pins: runPins,
+	legibility: runLegibility,
 };
 
 const processIo: CliIo = {

@@ -8,6 +8,7 @@ import { opticsSummary, opticsLines } from '../optics-report';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
+import { legibilityLines } from '../legibility-text';
 
 export const CAUTION =
 	'Predictions are models. Where a misreading can hurt someone, confirm with measured samples\n' +
@@ -71,6 +72,10 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 		);
 		lines.push('', 'Optics');
 		lines.push(...opticsLines(report).map((l) => (l ? `  ${l}` : l)));
+		if (report.legibility) {
+			lines.push('', 'Legibility');
+			lines.push(...legibilityLines(report.legibility).map((l) => (l ? `  ${l}` : l)));
+		}
 		lines.push(
 			'',
 			`Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`

@@ -16,6 +16,7 @@ import {
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
 import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
+import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-legibility';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -30,6 +31,8 @@ export interface DesignReport {
 	rules: RulesReport;
 	/** Where the drive check's V10/V90 came from. */
 	thresholdSource: 'entered' | 'cell model';
+	/** Every light scenario judged; null until the cell report exists. */
+	legibility: LegibilityReport | null;
 	severity: Severity;
 }
 
@@ -58,6 +61,7 @@ export function analyzeDesign(
 				fix: "Check the cell's fluid, gap and temperature range."
 			})
 		);
+	const legibility = cell ? analyzeLegibility({ design, cell }) : null;
 	return {
 		design: {
 			name: design.name,
@@ -72,11 +76,13 @@ export function analyzeDesign(
 		opticsFindings: cellFindings,
 		rules,
 		thresholdSource: useModel ? 'cell model' : 'entered',
+		legibility,
 		severity: overallSeverity([
 			...wiring.findings,
 			...drive.findings,
 			...cellFindings,
-			...rules.findings
+			...rules.findings,
+			...(legibility?.findings ?? [])
 		])
 	};
 }

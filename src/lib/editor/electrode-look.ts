@@ -12,7 +12,12 @@ export interface LookInputs {
 	colourOfCommon: (index: number) => string;
 	selection: ReadonlySet<string>;
 	hoverId: string | null;
-	appearance: { background: string; segmentOn: string; litIds?: ReadonlySet<string> } | null;
+	appearance: {
+		background: string;
+		segmentOn: string;
+		segmentOff?: string;
+		litIds?: ReadonlySet<string>;
+	} | null;
 	/** Electrodes sharing a crossing with another (drawn as conflicts in wiring view). */
 	conflicts?: ReadonlySet<string>;
 }
@@ -36,7 +41,7 @@ export function electrodeLook(e: Electrode, inputs: LookInputs): ElectrodeLook {
 		const a = inputs.appearance;
 		const lit = !a.litIds || a.litIds.has(e.id);
 		return {
-			fill: lit ? a.segmentOn : a.background,
+			fill: lit ? a.segmentOn : (a.segmentOff ?? a.background),
 			opacity: 1,
 			...(conflict ?? outline ?? { stroke: null, strokeWidth_px: 0, dash: null })
 		};

@@ -27,6 +27,8 @@ export interface CellReport {
 	background: PixelAppearance;
 	off: PixelAppearance;
 	on: PixelAppearance;
+	/** Background, off and on at each checked temperature (cold end, room, hot end). */
+	statesByTemperature: TemperatureStates[];
 	/** Off (unselected) segment against on segment, first-surface reflection included. */
 	contrastRatio: number;
 	/** Background against on segment. */
@@ -36,6 +38,13 @@ export interface CellReport {
 	ghostDeltaE00: number;
 	response: ReturnType<typeof responseVsTemperature>;
 	findings: Finding[];
+}
+
+export interface TemperatureStates {
+	temperature_C: number;
+	background: PixelAppearance;
+	off: PixelAppearance;
+	on: PixelAppearance;
 }
 
 function checkedTemperatures(min_C: number, max_C: number): number[] {
@@ -67,20 +76,23 @@ export function analyzeCell(
 		amplitude_V: drive.amplitude_V
 	});
 	const curves: ElectroOpticCurve[] = [];
-	let background, off, on;
+	const statesByTemperature: TemperatureStates[] = [];
 	for (const [index, temperature_C] of temperatures_C.entries()) {
 		const optics = createCellOptics({ cell, lighting, temperature_C });
 		curves.push(electroOpticCurve({ optics }));
-		if (temperature_C === room_C) {
-			const zero = optics.stateAt(0);
-			background = pixelAppearance(zero, lighting.illuminance_lx);
-			const offState = rms.off_V > 0 ? optics.stateAt(rms.off_V, zero.solution) : zero;
-			off = pixelAppearance(offState, lighting.illuminance_lx);
-			on = pixelAppearance(optics.stateAt(rms.on_V, offState.solution), lighting.illuminance_lx);
-		}
+		const zero = optics.stateAt(0);
+		const offState = rms.off_V > 0 ? optics.stateAt(rms.off_V, zero.solution) : zero;
+		statesByTemperature.push({
+			temperature_C,
+			background: pixelAppearance(zero, lighting.illuminance_lx),
+			off: pixelAppearance(offState, lighting.illuminance_lx),
+			on: pixelAppearance(optics.stateAt(rms.on_V, offState.solution), lighting.illuminance_lx)
+		});
 		onProgress?.(index + 1, temperatures_C.length);
 	}
-	if (!background || !off || !on) throw new Error('no room-temperature state was computed');
+	const roomStates = statesByTemperature.find((s) => s.temperature_C === room_C);
+	if (!roomStates) throw new Error('no room-temperature state was computed');
+	const { background, off, on } = roomStates;
 	const response = responseVsTemperature({
 		material,
 		geometry: geometryOfCell(cell),
@@ -120,6 +132,7 @@ export function analyzeCell(
 		background,
 		off,
 		on,
+		statesByTemperature,
 		contrastRatio: contrastRatio(off, on),
 		backgroundContrastRatio: contrastRatio(background, on),
 		deltaE00: deltaE2000(off, on),

@@ -51,3 +51,23 @@ export function deltaE2000ByCulori(reference: Lab, sample: Lab): number {
 		{ mode: 'lab65', l: sample.L, a: sample.a, b: sample.b }
 	);
 }
+
+/**
+ * sRGB preview of a colour in a lit scene: `xyz` in absolute units (Y = luminance, cd/m²) under
+ * a light of chromaticity `white` (Y = 100 scale), for a viewer adapted to a white of luminance
+ * `adaptedWhite_cdm2`. The colour is scaled so the adapted white has Y = 100, then converted as
+ * in xyzToSrgbPreview (Bradford to D65, culori's XYZ-D65 → sRGB). Brighter than the adapted
+ * white (a strong veil or backlight) is out of gamut and clamped.
+ */
+export function sceneColourPreview(colour: {
+	xyz_cdm2: Xyz;
+	white: Xyz;
+	adaptedWhite_cdm2: number;
+}): SrgbPreview {
+	const scale = 100 / colour.adaptedWhite_cdm2;
+	const { X, Y, Z } = colour.xyz_cdm2;
+	return xyzToSrgbPreview({
+		xyz: { X: X * scale, Y: Y * scale, Z: Z * scale },
+		white: colour.white
+	});
+}

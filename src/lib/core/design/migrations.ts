@@ -6,6 +6,7 @@
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
+import { addLegibilitySection } from './legibility-schema';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -28,7 +29,9 @@ export const DESIGN_MIGRATIONS: MigrationTable = {
 					typeof e === 'object' && e !== null && !Array.isArray(e) ? { locked: false, ...e } : e
 				)
 			: doc.electrodes
-	})
+	}),
+	/** Version 4 adds the light scenarios, readers and reading preview (legibility). */
+	3: addLegibilitySection
 };
 
 export type MigrationResult =

@@ -5,6 +5,7 @@
 import { DRIVE_AND_OPTICS_CODES } from './codes-drive-optics';
 import { WIRING_CODES } from './codes-wiring';
 import { RULE_CODES } from './codes-rules';
+import { LEGIBILITY_CODES } from './codes-legibility';
 
 export interface FindingCode {
 	code: string;
@@ -14,7 +15,8 @@ export interface FindingCode {
 export const FINDING_CODES: readonly FindingCode[] = [
 	...DRIVE_AND_OPTICS_CODES,
 	...WIRING_CODES,
-	...RULE_CODES
+	...RULE_CODES,
+	...LEGIBILITY_CODES
 ];
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));

@@ -5,6 +5,8 @@
 export interface Appearance {
 	background: string;
 	segmentOn: string;
+	/** Colour of a segment that is driven off (ghosting shows here); the background when absent. */
+	segmentOff?: string;
 	/** Which electrodes to show switched on; all when absent. */
 	litIds?: ReadonlySet<string>;
 }

@@ -1,0 +1,43 @@
+import { expect, test } from '@playwright/test';
+import { openApp } from './ready';
+
+test('type a reading, switch scenarios: the preview and the verdict follow', async ({ page }) => {
+	await openApp(page);
+	await page.getByTestId('view-legibility').click();
+	const preview = page.getByTestId('reading-preview');
+	await expect(preview).toBeVisible({ timeout: 30_000 });
+
+	// "12:34" with six bars and five icons lit
+	const litBefore = Number(await preview.getAttribute('data-lit'));
+	await page.getByTestId('reading-text').fill('88:88');
+	await expect(preview).not.toHaveAttribute('data-lit', String(litBefore));
+	// 4 × 7 segments + 2 colon dots + 6 bars + 5 icons
+	await expect(preview).toHaveAttribute('data-lit', String(28 + 2 + 6 + 5));
+
+	// from the dim room to direct sun: other colours, another verdict line
+	const verdict = page.getByTestId('picked-verdict');
+	await expect(verdict).toContainText('Dim room');
+	const dimOn = await preview.getAttribute('data-on');
+	await page.getByTestId('scenario-row').filter({ hasText: 'Direct sun' }).click();
+	await expect(verdict).toContainText('Direct sun');
+	await expect(verdict).toContainText('glare');
+	await expect(preview).not.toHaveAttribute('data-on', dimOn!);
+
+	// reading from 5 m: the digits become too small for the distance
+	await page.getByTestId('scenario-distance').fill('5000');
+	await expect(verdict).toContainText('not readable');
+	await expect(verdict).toContainText('too small for the distance');
+	await expect(page.getByTestId('legibility-verdict')).toContainText('legibility.too-small');
+	await expect(page.getByTestId('overall')).toHaveText('Fails checks');
+	await expect(page.getByTestId('legibility-map').locator('svg').first()).toBeVisible();
+	await expect(page.locator('body')).not.toContainText('NaN');
+});
+
+test('a safety-relevant readout carries the caution', async ({ page }) => {
+	await openApp(page);
+	await page.getByTestId('view-legibility').click();
+	await expect(page.getByTestId('reading-preview')).toBeVisible({ timeout: 30_000 });
+	await page.getByTestId('safety-relevant').check();
+	await expect(page.getByTestId('safety-caution')).toContainText('measured samples');
+	await expect(page.getByTestId('legibility-verdict')).toContainText('legibility.safety-caution');
+});
