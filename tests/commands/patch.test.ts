@@ -153,6 +153,7 @@ describe('document fields', () => {
 			'glass',
 			'lighting',
 			'name',
+			'orientation',
 			'pinout',
 			'rules',
 			'thresholds',

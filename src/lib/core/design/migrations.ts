@@ -6,6 +6,7 @@
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
+import { addOrientation } from './orientation-migration';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -28,7 +29,11 @@ export const DESIGN_MIGRATIONS: MigrationTable = {
 					typeof e === 'object' && e !== null && !Array.isArray(e) ? { locked: false, ...e } : e
 				)
 			: doc.electrodes
-	})
+	}),
+	// pass-through here; the real step lands with its own section
+	3: (doc) => ({ ...doc }),
+	/** Version 5 adds the cell orientation: rubbing directions, twist sense, rear glass. */
+	4: addOrientation
 };
 
 export type MigrationResult =
