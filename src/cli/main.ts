@@ -10,6 +10,7 @@ import { runCheck } from './commands/check';
 import { runDemo } from './commands/demo';
 import { runCell } from './commands/cell';
 import { runIlluminant } from './commands/illuminant';
+import { runViewAngle } from './commands/view-angle';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -21,6 +22,7 @@ Commands:
   cell         evaluate a reflective TN cell: transmission, V10/V50/V90, colours
   illuminant   X, Y, Z and x, y of a CIE illuminant's white
   check FILE   validate a design; check its wiring, drive and optics
+  view-angle FILE  contrast over viewing directions, best direction, parallax shadow
   demo         write the demo design to stdout
 
 Run "sunglyph <command> --help" for a command's options.`;
@@ -31,7 +33,8 @@ const COMMANDS: Record<string, Command> = {
 	cell: runCell,
 	illuminant: runIlluminant,
 	check: runCheck,
-	demo: runDemo
+	demo: runDemo,
+	'view-angle': runViewAngle
 };
 
 const processIo: CliIo = {

@@ -15,6 +15,7 @@ import {
 } from './drive/analyze-drive';
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
+import { orientationFindings } from './viewangle/orientation-findings';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -45,6 +46,7 @@ export function analyzeDesign(
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
+	cellFindings.push(...orientationFindings(design));
 	if (cellError)
 		cellFindings.push(
 			finding({

@@ -43,12 +43,13 @@ export type TwistSense = z.infer<typeof twistSenseSchema>;
 export type Orientation = z.infer<typeof orientationSchema>;
 
 /**
- * Front rubbed toward 4:30, rear toward 1:30 with a right-handed 90° twist: the mid-plane
- * director points toward 6 o'clock.
+ * Front rubbed toward 7:30, rear toward 4:30, right-handed 90° twist (the mid-plane director lies
+ * along 3–9 o'clock): with the default cell the viewing-angle model puts the best viewing
+ * direction near 6 o'clock, a readout seen best from below.
  */
 export const DEFAULT_ORIENTATION: Orientation = {
-	frontRubbing_deg: 45,
-	rearRubbing_deg: 315,
+	frontRubbing_deg: 135,
+	rearRubbing_deg: 45,
 	twistSense: 'right-handed',
 	rearGlass_mm: 0.7
 };

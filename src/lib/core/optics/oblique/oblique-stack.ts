@@ -139,7 +139,8 @@ export function createObliqueStackEvaluator(options: ObliqueStackOptions): Obliq
 	function evaluate(
 		slabs: OrientedSlabs,
 		direction: ViewDirection,
-		diffuseIn: Float64Array | null
+		diffuseIn: Float64Array | null,
+		forwardOnly = false
 	): DirectionParts {
 		const g = waveGeometry(direction);
 		const surface = isotropicInterface({ n1: 1, n2: surfaceIndex, sinTheta1: Math.sqrt(g.betaSq) });
@@ -174,6 +175,8 @@ export function createObliqueStackEvaluator(options: ObliqueStackOptions): Obliq
 			setReal(q, qoS[0], qoS[1], qoS[2], qoS[3]);
 			multiply(t, q, f);
 			const arriving = 0.5 * frobeniusNormSquared(t);
+			toReflector[i] = arriving;
+			if (forwardOnly) continue;
 			// backward stack B (tangential → tangential)
 			identity(b);
 			propagatePolarizer(b, rearPass);
@@ -191,7 +194,6 @@ export function createObliqueStackEvaluator(options: ObliqueStackOptions): Obliq
 			const received = diffuseIn ? diffuseIn[i] : arriving;
 			reflectance[i] =
 				surfaceR + reflector.reflectance[i] * ((1 - delta) * kept + delta * received * leaving);
-			toReflector[i] = arriving;
 		}
 		return { reflectance, toReflector, surface: surfaceR };
 	}
@@ -200,7 +202,7 @@ export function createObliqueStackEvaluator(options: ObliqueStackOptions): Obliq
 		if (incidentLight === 'mirrored' || delta === 0) return { slabs, diffuseIn: null };
 		const diffuseIn = new Float64Array(count);
 		for (const d of hemisphereDirections()) {
-			const parts = evaluate(slabs, d, null);
+			const parts = evaluate(slabs, d, null, true);
 			for (let i = 0; i < count; i++) diffuseIn[i] += d.weight * parts.toReflector[i];
 		}
 		return { slabs, diffuseIn };

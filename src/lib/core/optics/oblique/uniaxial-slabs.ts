@@ -41,7 +41,7 @@ export interface SlabPass {
 	sense: 1 | -1;
 }
 
-const TINY = 1e-14;
+const DEGENERATE = 1e-24;
 
 /** m ← (slab stack)·m, a complex 2×2 in the layout of ../complex2x2.ts. */
 export function propagateSlabs(m: Float64Array, pass: SlabPass): Float64Array {
@@ -64,18 +64,13 @@ export function propagateSlabs(m: Float64Array, pass: SlabPass): Float64Array {
 		const delta = k0h * (sense * nze - sense * nzo);
 		// e_t = c_t − (c·N/n_o²)·β ; o_t = (β_y c_z − N_z c_y, N_z c_x − β_x c_z)
 		const cn = (s + cz * nze) / no2;
-		let ex = cx - cn * bx,
+		const ex = cx - cn * bx,
 			ey = cy - cn * by;
-		let ox = by * cz - nzo * cy,
+		const ox = by * cz - nzo * cy,
 			oy = nzo * cx - bx * cz;
-		const le = Math.hypot(ex, ey),
-			lo = Math.hypot(ox, oy);
-		if (le < TINY || lo < TINY) continue; // axis along the wave: both modes alike
-		ex /= le;
-		ey /= le;
-		ox /= lo;
-		oy /= lo;
+		// S = [e o] need not be normalised: ê ⊗ r is invariant under scaling either column
 		const det = ex * oy - ey * ox;
+		if (!(Math.abs(det) > DEGENERATE)) continue; // axis along the wave: both modes alike
 		// first row of S⁻¹ = (o_y, −o_x)/det
 		const r0 = oy / det,
 			r1 = -ox / det;
