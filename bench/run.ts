@@ -16,6 +16,7 @@ import { indicesAt } from '../src/lib/core/lc/temperature';
 import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
 import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
 import { demoDesign } from '../src/lib/core/design/demo';
+import { viewAngleBenchmarks } from './view-angle-bench';
 
 interface Row {
 	name: string;
@@ -116,6 +117,8 @@ rows.push(
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
 	})
 );
+
+for (const b of viewAngleBenchmarks(demo)) rows.push(measure(b.name, b.target_ms, b.runs, b.body));
 
 const pad = (text: string, width: number) => text.padEnd(width);
 console.log(`Node ${process.version}, ${new Date().toISOString()}`);

@@ -47,6 +47,7 @@ const DEGENERATE = 1e-24;
 export function propagateSlabs(m: Float64Array, pass: SlabPass): Float64Array {
 	const { slabs, betaX: bx, betaY: by, ne, no, sense } = pass;
 	const no2 = no * no;
+	const invNo2 = 1 / no2;
 	const dEps = ne * ne - no2;
 	const betaSq = bx * bx + by * by;
 	const nzo = sense * Math.sqrt(no2 - betaSq);
@@ -63,7 +64,7 @@ export function propagateSlabs(m: Float64Array, pass: SlabPass): Float64Array {
 		const nze = (-dEps * cz * s + sense * root) / ezz;
 		const delta = k0h * (sense * nze - sense * nzo);
 		// e_t = c_t − (c·N/n_o²)·β ; o_t = (β_y c_z − N_z c_y, N_z c_x − β_x c_z)
-		const cn = (s + cz * nze) / no2;
+		const cn = (s + cz * nze) * invNo2;
 		const ex = cx - cn * bx,
 			ey = cy - cn * by;
 		const ox = by * cz - nzo * cy,
@@ -72,8 +73,9 @@ export function propagateSlabs(m: Float64Array, pass: SlabPass): Float64Array {
 		const det = ex * oy - ey * ox;
 		if (!(Math.abs(det) > DEGENERATE)) continue; // axis along the wave: both modes alike
 		// first row of S⁻¹ = (o_y, −o_x)/det
-		const r0 = oy / det,
-			r1 = -ox / det;
+		const invDet = 1 / det;
+		const r0 = oy * invDet,
+			r1 = -ox * invDet;
 		// f = e^{−iΔ} − 1
 		const fr = Math.cos(delta) - 1,
 			fi = -Math.sin(delta);
