@@ -98,8 +98,18 @@ const opticsAt = [-10, 25, 60].map((temperature_C) =>
 	createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C })
 );
 rows.push(
-	measure('electro-optic curves, 44 voltages × 3 temperatures', 150, 15, () => {
-		for (const optics of opticsAt) electroOpticCurve({ optics });
+	measure('electro-optic curves, 28 voltages × 3 temperatures, refined', 150, 15, () => {
+		for (const optics of opticsAt)
+			electroOpticCurve({
+				optics,
+				withSlices: (slices) =>
+					createCellOptics({
+						cell: DEFAULT_CELL,
+						lighting: DEFAULT_LIGHTING,
+						temperature_C: optics.temperature_C,
+						slices
+					})
+			});
 	})
 );
 rows.push(

@@ -70,7 +70,12 @@ export function analyzeCell(
 	let background, off, on;
 	for (const [index, temperature_C] of temperatures_C.entries()) {
 		const optics = createCellOptics({ cell, lighting, temperature_C });
-		curves.push(electroOpticCurve({ optics }));
+		curves.push(
+			electroOpticCurve({
+				optics,
+				withSlices: (slices) => createCellOptics({ cell, lighting, temperature_C, slices })
+			})
+		);
 		if (temperature_C === room_C) {
 			const zero = optics.stateAt(0);
 			background = pixelAppearance(zero, lighting.illuminance_lx);
