@@ -192,3 +192,18 @@ describe('contrast map of a design', () => {
 		);
 	});
 });
+
+describe('cell look from one direction', () => {
+	it('gives the same figures as the map at a sampled direction', async () => {
+		const { cellReflectanceAt } = await import('../../src/lib/core/viewangle/cell-reflectance-at');
+		const design = demoDesign();
+		const map = contrastMap({ design, polarStep_deg: 20, azimuthStep_deg: 90 });
+		const off = cellReflectanceAt({ design, polar_deg: 40, azimuth_deg: 90, state: 'off' });
+		const on = cellReflectanceAt({ design, polar_deg: 40, azimuth_deg: 90, state: 'on' });
+		expect(off.Y).toBeCloseTo(map.off[2][1].Y, 9);
+		expect(on.Y).toBeCloseTo(map.on[2][1].Y, 9);
+		expect(on.srgbHex).toBe(map.on[2][1].hex);
+		expect(on.voltage_V).toBeCloseTo(map.on_V, 12);
+		expect(off.reflectance.every((r) => r >= 0 && r <= 1)).toBe(true);
+	});
+});
