@@ -26,6 +26,7 @@ import { largeDesign } from './large-design';
 import { analyzeCell as cellReportOf } from '../src/lib/core/cell/analyze-cell';
 import { analyzeLegibility } from '../src/lib/core/legibility/analyze-legibility';
 import { legibilityMap } from '../src/lib/core/legibility/legibility-map';
+import { viewAngleBenchmarks } from './view-angle-bench';
 
 interface Row {
 	name: string;
@@ -107,8 +108,18 @@ const opticsAt = [-10, 25, 60].map((temperature_C) =>
 	createCellOptics({ cell: DEFAULT_CELL, lighting: DEFAULT_LIGHTING, temperature_C })
 );
 rows.push(
-	measure('electro-optic curves, 44 voltages × 3 temperatures', 150, 15, () => {
-		for (const optics of opticsAt) electroOpticCurve({ optics });
+	measure('electro-optic curves, 28 voltages × 3 temperatures, refined', 150, 15, () => {
+		for (const optics of opticsAt)
+			electroOpticCurve({
+				optics,
+				withSlices: (slices) =>
+					createCellOptics({
+						cell: DEFAULT_CELL,
+						lighting: DEFAULT_LIGHTING,
+						temperature_C: optics.temperature_C,
+						slices
+					})
+			});
 	})
 );
 rows.push(
@@ -183,6 +194,8 @@ rows.push(
 		});
 	})
 );
+
+for (const b of viewAngleBenchmarks(demo)) rows.push(measure(b.name, b.target_ms, b.runs, b.body));
 
 const pad = (text: string, width: number) => text.padEnd(width);
 console.log(`Node ${process.version}, ${new Date().toISOString()}`);

@@ -14,6 +14,7 @@ import { serializeDesign } from '../src/lib/core/design/parse-design';
 import { DEFAULT_CELL } from '../src/lib/core/design/cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../src/lib/core/design/rules-schema';
 import { defaultLegibility } from '../src/lib/core/design/legibility-schema';
+import { DEFAULT_ORIENTATION } from '../src/lib/core/design/orientation-schema';
 
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 const pt = (x: number, y: number, inH?: [number, number], outH?: [number, number]): Point => ({
@@ -272,7 +273,8 @@ const design: Design = {
 	legibility: {
 		...defaultLegibility({ distance_mm: 600, transflective: false }),
 		reading: { text: '12:34', bars: 6, icons: ['batFrame', 'bat1', 'bat2', 'drop', 'clock'] }
-	}
+	},
+	orientation: DEFAULT_ORIENTATION
 };
 
 const target = new URL('../src/lib/core/design/demo-design.json', import.meta.url);

@@ -14,6 +14,7 @@ import { runReport } from './commands/report';
 import { runAssign } from './commands/assign';
 import { runPins } from './commands/pins';
 import { runLegibility } from './commands/legibility';
+import { runViewAngle } from './commands/view-angle';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -27,6 +28,7 @@ Commands:
   check FILE   validate a design; check its wiring, drive and optics
   report FILE  write the printable design report (HTML, or PDF with --pdf)
   legibility FILE  light scenarios, contrast with glare, visual angle, threshold, verdicts
+  view-angle FILE  contrast over viewing directions, best direction, parallax shadow
   demo         write the demo design to stdout
   assign FILE  wire a design automatically for N commons (--commons N [--out FILE])
   pins FILE    pin map along the glass edge; --csv, --header (C) or --segments (CSV)
@@ -44,6 +46,7 @@ const COMMANDS: Record<string, Command> = {
 	assign: runAssign,
 	pins: runPins,
 	legibility: runLegibility,
+	'view-angle': runViewAngle
 };
 
 const processIo: CliIo = {

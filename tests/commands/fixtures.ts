@@ -5,6 +5,7 @@
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../../src/lib/core/design/rules-schema';
 import { defaultLegibility } from '../../src/lib/core/design/legibility-schema';
+import { DEFAULT_ORIENTATION } from '../../src/lib/core/design/orientation-schema';
 import {
 	DESIGN_FORMAT,
 	DESIGN_VERSION,
@@ -69,7 +70,8 @@ export function emptyDesign(): Design {
 		lighting: { ...DEFAULT_LIGHTING },
 		rules: { ...DEFAULT_RULES },
 		pinout: { ...DEFAULT_PINOUT },
-		legibility: defaultLegibility({ distance_mm: 500, transflective: false })
+		legibility: defaultLegibility({ distance_mm: 500, transflective: false }),
+		orientation: { ...DEFAULT_ORIENTATION }
 	};
 }
 

@@ -154,6 +154,7 @@ describe('document fields', () => {
 			'legibility',
 			'lighting',
 			'name',
+			'orientation',
 			'pinout',
 			'rules',
 			'thresholds',

@@ -12,6 +12,7 @@ import { analyzeDesign } from '../../src/lib/core/analyze-design';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../../src/lib/core/design/rules-schema';
 import { defaultLegibility } from '../../src/lib/core/design/legibility-schema';
+import { DEFAULT_ORIENTATION } from '../../src/lib/core/design/orientation-schema';
 
 // JSON has no negative zero, so −0 and 0 are the same coordinate in a saved design.
 const finite = fc
@@ -60,7 +61,7 @@ const designArb: fc.Arbitrary<Design> = fc
 		}));
 		return {
 			format: 'sunglyph-design',
-			version: 4,
+			version: 5,
 			name: 'random',
 			glass: {
 				width_mm: 50,
@@ -91,7 +92,8 @@ const designArb: fc.Arbitrary<Design> = fc
 			lighting: DEFAULT_LIGHTING,
 			rules: { ...DEFAULT_RULES, minGap_mm: 0.01 * (1 + (lines % 5)) },
 			pinout: { ...DEFAULT_PINOUT, order: commons % 2 ? 'commons-last' : 'commons-first' },
-			legibility: defaultLegibility({ distance_mm: 500, transflective: commons % 2 === 0 })
+			legibility: defaultLegibility({ distance_mm: 500, transflective: commons % 2 === 0 }),
+			orientation: { ...DEFAULT_ORIENTATION, rearGlass_mm: [0.4, 0.55, 0.7, 1.1][commons % 4] }
 		} satisfies Design;
 	});
 
@@ -181,6 +183,7 @@ describe('design document', () => {
 	function asVersion2(design: Design): Record<string, unknown> {
 		const doc = JSON.parse(serializeDesign(design));
 		doc.version = 2;
+		delete doc.orientation;
 		delete doc.rules;
 		delete doc.pinout;
 		for (const e of doc.electrodes) delete e.locked;

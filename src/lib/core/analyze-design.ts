@@ -17,6 +17,7 @@ import { finding, overallSeverity, type Finding, type Severity } from './finding
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
 import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
 import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-legibility';
+import { orientationFindings } from './viewangle/orientation-findings';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -52,6 +53,7 @@ export function analyzeDesign(
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
+	cellFindings.push(...orientationFindings(design));
 	if (cellError)
 		cellFindings.push(
 			finding({

@@ -79,7 +79,12 @@ export function analyzeCell(
 	const statesByTemperature: TemperatureStates[] = [];
 	for (const [index, temperature_C] of temperatures_C.entries()) {
 		const optics = createCellOptics({ cell, lighting, temperature_C });
-		curves.push(electroOpticCurve({ optics }));
+		curves.push(
+			electroOpticCurve({
+				optics,
+				withSlices: (slices) => createCellOptics({ cell, lighting, temperature_C, slices })
+			})
+		);
 		const zero = optics.stateAt(0);
 		const offState = rms.off_V > 0 ? optics.stateAt(rms.off_V, zero.solution) : zero;
 		statesByTemperature.push({

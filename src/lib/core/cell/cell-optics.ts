@@ -25,7 +25,11 @@ import { illuminantByName } from '../color/illuminant-by-name';
 import { geometryOfCell, materialOfCell, stackOfCell } from './resolve-cell';
 
 export const CELL_GRID = VISIBLE_5NM_GRID;
-/** Director nodes across the gap: 60 slabs keep the spectra within ~1e-4 of a fine solve. */
+/**
+ * Default director slabs across the gap. The error of the profile falls as 1/N² (second-order
+ * differences): at 60 slabs the mid-plane tilt just above threshold is off by ≈ 3e-3 rad for a
+ * high-Δε fluid, ≈ 8e-5 at 400. `chooseSlices` (slice-count.ts) picks N from an error estimate.
+ */
 export const CELL_SLICES = 60;
 
 export interface PixelState {
@@ -37,6 +41,7 @@ export interface PixelState {
 
 export interface CellOptics {
 	temperature_C: number;
+	slices: number;
 	directorCell: DirectorCell;
 	/** Analytic threshold of the twisted cell (Schadt–Helfrich form), V. */
 	analyticThreshold_V: number;
@@ -58,8 +63,11 @@ export function createCellOptics(options: {
 	temperature_C: number;
 	/** Fix the angle between the polarizers instead of following the display mode. */
 	polarizerAngle_deg?: number;
+	/** Director slabs across the gap (default CELL_SLICES). */
+	slices?: number;
 }): CellOptics {
 	const { cell, lighting, temperature_C } = options;
+	const slices = options.slices ?? CELL_SLICES;
 	const material = materialOfCell(cell);
 	const directorCell = cellAt({ geometry: geometryOfCell(cell), material, temperature_C });
 	const wavelengths_nm = gridWavelengths_nm(CELL_GRID);
@@ -83,13 +91,14 @@ export function createCellOptics(options: {
 		evaluator.evaluate(profile, createStackSpectra(wavelengths_nm.length));
 	return {
 		temperature_C,
+		slices,
 		directorCell,
 		analyticThreshold_V,
 		wavelengths_nm,
 		spectraOf,
 		singlePassOf: (profile) => spectraOf(profile).singlePass,
 		stateAt(voltage_V, start) {
-			const solution = solveDirector({ cell: directorCell, voltage_V, start, slices: CELL_SLICES });
+			const solution = solveDirector({ cell: directorCell, voltage_V, start, slices });
 			if (!solution.convergence.converged) {
 				throw new Error(
 					`the director solution did not converge at ${voltage_V.toFixed(3)} V, ${temperature_C} °C`

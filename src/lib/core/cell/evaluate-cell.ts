@@ -41,7 +41,11 @@ export function evaluateCell(options: {
 }): CellEvaluation {
 	const { cell, lighting, temperature_C, wavelength_nm, volts_V, polarizerAngle_deg } = options;
 	const optics = createCellOptics({ cell, lighting, temperature_C, polarizerAngle_deg });
-	const curve = electroOpticCurve({ optics });
+	const curve = electroOpticCurve({
+		optics,
+		withSlices: (slices) =>
+			createCellOptics({ cell, lighting, temperature_C, polarizerAngle_deg, slices })
+	});
 	const zero = optics.stateAt(0);
 	const onVoltage_V = volts_V > 0 ? volts_V : SATURATION_FACTOR * optics.analyticThreshold_V;
 	const driven = optics.stateAt(onVoltage_V);

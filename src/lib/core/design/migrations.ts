@@ -7,6 +7,7 @@ import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
 import { addLegibilitySection } from './legibility-schema';
+import { addOrientation } from './orientation-migration';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -31,7 +32,9 @@ export const DESIGN_MIGRATIONS: MigrationTable = {
 			: doc.electrodes
 	}),
 	/** Version 4 adds the light scenarios, readers and reading preview (legibility). */
-	3: addLegibilitySection
+	3: addLegibilitySection,
+	/** Version 5 adds the cell orientation: rubbing directions, twist sense, rear glass. */
+	4: addOrientation
 };
 
 export type MigrationResult =

@@ -1,5 +1,5 @@
 /**
- * The sunglyph design document, version 4: the schema is the single source of truth and the
+ * The sunglyph design document, version 5: the schema is the single source of truth and the
  * TypeScript types are derived from it.
  *
  * Units: all lengths in millimetres (suffix `_mm`), voltages in volts (`_V`), frequencies in hertz
@@ -14,9 +14,10 @@ import { z } from 'zod';
 import { cellSchema, lightingSchema } from './cell-schema';
 import { pinoutSchema, rulesSchema } from './rules-schema';
 import { legibilitySchema } from './legibility-schema';
+import { orientationSchema } from './orientation-schema';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
-export const DESIGN_VERSION = 4;
+export const DESIGN_VERSION = 5;
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
@@ -127,7 +128,8 @@ export const designSchema = z.strictObject({
 	lighting: lightingSchema,
 	rules: rulesSchema,
 	pinout: pinoutSchema,
-	legibility: legibilitySchema
+	legibility: legibilitySchema,
+	orientation: orientationSchema
 });
 
 export type Point = z.infer<typeof pointSchema>;

@@ -6,6 +6,7 @@ import { DRIVE_AND_OPTICS_CODES } from './codes-drive-optics';
 import { WIRING_CODES } from './codes-wiring';
 import { RULE_CODES } from './codes-rules';
 import { LEGIBILITY_CODES } from './codes-legibility';
+import { VIEW_ANGLE_CODES } from './codes-viewangle';
 
 export interface FindingCode {
 	code: string;
@@ -16,7 +17,8 @@ export const FINDING_CODES: readonly FindingCode[] = [
 	...DRIVE_AND_OPTICS_CODES,
 	...WIRING_CODES,
 	...RULE_CODES,
-	...LEGIBILITY_CODES
+	...LEGIBILITY_CODES,
+	...VIEW_ANGLE_CODES
 ];
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));
