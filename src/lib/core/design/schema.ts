@@ -13,6 +13,7 @@
 import { z } from 'zod';
 import { cellSchema, lightingSchema } from './cell-schema';
 import { pinoutSchema, rulesSchema } from './rules-schema';
+import { loadSettingsSchema } from '../load/load-settings';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
 export const DESIGN_VERSION = 3;
@@ -125,7 +126,9 @@ export const designSchema = z.strictObject({
 	cell: cellSchema,
 	lighting: lightingSchema,
 	rules: rulesSchema,
-	pinout: pinoutSchema
+	pinout: pinoutSchema,
+	/** Optional electrical-load inputs (battery, budget, ITO traces); defaults when absent. */
+	load: loadSettingsSchema.optional()
 });
 
 export type Point = z.infer<typeof pointSchema>;
