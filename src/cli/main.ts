@@ -10,6 +10,7 @@ import { runCheck } from './commands/check';
 import { runDemo } from './commands/demo';
 import { runCell } from './commands/cell';
 import { runIlluminant } from './commands/illuminant';
+import { runLoad } from './commands/load';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -21,6 +22,7 @@ Commands:
   cell         evaluate a reflective TN cell: transmission, V10/V50/V90, colours
   illuminant   X, Y, Z and x, y of a CIE illuminant's white
   check FILE   validate a design; check its wiring, drive and optics
+  load FILE    capacitance, drive current, battery life and ITO trace settling of a design
   demo         write the demo design to stdout
 
 Run "sunglyph <command> --help" for a command's options.`;
@@ -31,6 +33,7 @@ const COMMANDS: Record<string, Command> = {
 	cell: runCell,
 	illuminant: runIlluminant,
 	check: runCheck,
+	load: runLoad,
 	demo: runDemo
 };
 

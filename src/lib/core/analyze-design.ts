@@ -15,6 +15,7 @@ import {
 } from './drive/analyze-drive';
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
+import { analyzeLoad, type LoadReport } from './load/analyze-load';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -27,6 +28,8 @@ export interface DesignReport {
 	opticsFindings: Finding[];
 	/** Where the drive check's V10/V90 came from. */
 	thresholdSource: 'entered' | 'cell model';
+	/** Electrical load: capacitance, current, battery life, trace settling. */
+	load: LoadReport;
 	severity: Severity;
 }
 
@@ -42,6 +45,7 @@ export function analyzeDesign(
 		drive: design.drive,
 		thresholds: useModel ? cell.thresholds : design.thresholds
 	});
+	const load = analyzeLoad(design);
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
@@ -67,7 +71,13 @@ export function analyzeDesign(
 		cellError,
 		opticsFindings: cellFindings,
 		thresholdSource: useModel ? 'cell model' : 'entered',
-		severity: overallSeverity([...wiring.findings, ...drive.findings, ...cellFindings])
+		load,
+		severity: overallSeverity([
+			...wiring.findings,
+			...drive.findings,
+			...cellFindings,
+			...load.findings
+		])
 	};
 }
 
