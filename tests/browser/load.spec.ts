@@ -1,0 +1,27 @@
+import { expect, test } from '@playwright/test';
+import { openApp } from './ready';
+
+test('the load tab shows current, battery life, per-pin tables and plots; a budget fails', async ({
+	page
+}) => {
+	await openApp(page);
+	await page.getByTestId('view-load').click();
+	await expect(page.getByTestId('load-current')).toContainText('µA');
+	await expect(page.getByTestId('load-lines').locator('tbody tr')).toHaveCount(14);
+	await expect(page.getByTestId('load-commons').locator('tbody tr')).toHaveCount(4);
+	await expect(page.getByTestId('load-plot-temperature').locator('svg')).toBeVisible();
+	await expect(page.getByTestId('load-plot-frame-rate').locator('svg')).toBeVisible();
+	await expect(page.getByTestId('battery-life')).toHaveText('—');
+	await page.getByTestId('battery-input').fill('220');
+	await expect(page.getByTestId('battery-life')).toContainText('years');
+	await page.getByTestId('budget-input').fill('1');
+	await expect(page.getByTestId('load-verdict')).toContainText('over the 1 µA budget');
+	await expect(page.getByTestId('overall')).toHaveText('Fails checks');
+	await page.getByTestId('load-pattern').selectOption('all-off');
+	await expect(page.getByTestId('load-verdict').locator('[data-code]').first()).toHaveAttribute(
+		'data-code',
+		'load.current-over-budget'
+	);
+	await page.getByTestId('budget-input').fill('0');
+	await expect(page.getByTestId('load-verdict')).toContainText('The display draws');
+});
