@@ -16,6 +16,8 @@ import { indicesAt } from '../src/lib/core/lc/temperature';
 import { gridWavelengths_nm, VISIBLE_5NM_GRID } from '../src/lib/core/color/spectrum';
 import { analyzeDrive } from '../src/lib/core/drive/analyze-drive';
 import { demoDesign } from '../src/lib/core/design/demo';
+import { analyzeLoad } from '../src/lib/core/load/analyze-load';
+import { loadBenchDesign } from './load-design';
 
 interface Row {
 	name: string;
@@ -115,6 +117,23 @@ rows.push(
 	measure('drive check of the demo design', null, 400, () => {
 		analyzeDrive({ drive: demo.drive, thresholds: demo.thresholds });
 	})
+);
+const fresh = (d: typeof demo) => ({ ...d, electrodes: d.electrodes.map((e) => ({ ...e })) });
+rows.push(
+	measure('electrical load of the demo, areas flattened afresh', null, 100, () =>
+		analyzeLoad(fresh(demo))
+	)
+);
+const bigLoad = loadBenchDesign(500);
+rows.push(
+	measure('electrical load, 500 electrodes, areas flattened afresh', null, 20, () =>
+		analyzeLoad(fresh(bigLoad))
+	)
+);
+rows.push(
+	measure('electrical load, 500 electrodes, areas known (an edit)', null, 40, () =>
+		analyzeLoad(bigLoad)
+	)
 );
 
 const pad = (text: string, width: number) => text.padEnd(width);

@@ -12,7 +12,7 @@ import type { Design } from '../design/schema';
 import { finding, overallSeverity, type Finding, type Severity } from '../findings/finding';
 import { batteryLife_h, formatDuration } from './battery-life';
 import { capacitancePerArea_pF_per_mm2, PF_PER_F } from './capacitance';
-import { driveLoad, type DriveLoad } from './drive-load';
+import { prepareDriveLoad, type DriveLoad } from './drive-load';
 import { electrodeArea_mm2 } from './electrode-capacitance';
 import { pixelPermittivity, type PixelPermittivity } from './fluid-permittivity';
 import { pinTotals } from './line-totals';
@@ -74,11 +74,12 @@ export function analyzeLoad(
 	let worst = { temperature_C, load: null as DriveLoad | null, maxOn_F: new Map<string, number>() };
 	try {
 		permittivity = pixelPermittivity({ cell: design.cell, temperature_C });
-		room = driveLoad({ design, permittivity, onProbability, areas_mm2 });
+		const prepared = prepareDriveLoad({ design, onProbability, areas_mm2 });
+		room = prepared.at({ permittivity });
 		worst.load = room;
 		for (const t of rangeTemperatures_C(range)) {
 			const eps = pixelPermittivity({ cell: design.cell, temperature_C: t });
-			const load = driveLoad({ design, permittivity: eps, onProbability, areas_mm2 });
+			const load = prepared.at({ permittivity: eps });
 			if (load.current_A > (worst.load?.current_A ?? 0))
 				worst = { ...worst, temperature_C: t, load };
 			for (const e of load.electrodes)

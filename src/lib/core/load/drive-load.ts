@@ -9,9 +9,9 @@
  * them).
  */
 import type { Design } from '../design/schema';
-import { electrodeLoads, type ElectrodeLoad } from './electrode-capacitance';
+import { electrodeArea_mm2, electrodeLoads, type ElectrodeLoad } from './electrode-capacitance';
 import type { PixelPermittivity } from './fluid-permittivity';
-import { cycleDuration_s, cycleEnergies_J, type PixelSite } from './waveform-energy';
+import { cycleDuration_s, cycleEnergyCoefficients, type PixelSite } from './waveform-energy';
 
 export interface ElectrodeDriveLoad extends ElectrodeLoad {
 	/** Expected energy per cycle in the shown pattern, J. */
@@ -27,6 +27,57 @@ export interface DriveLoad {
 	current_A: number;
 }
 
+/**
+ * Prepares the waveform's part of the load once (it does not depend on the fluid's permittivity
+ * or the frame rate); `at` then gives the load for any permittivity and frame rate.
+ */
+export function prepareDriveLoad(options: {
+	design: Design;
+	onProbability: number;
+	areas_mm2?: readonly number[];
+}): {
+	at: (o: { permittivity: PixelPermittivity; frameRate_Hz?: number }) => DriveLoad;
+} {
+	const { design } = options;
+	const drive = design.drive;
+	const areas_mm2 = options.areas_mm2 ?? design.electrodes.map(electrodeArea_mm2);
+	const commonIndex = new Map(design.commons.map((c, i) => [c.id, i]));
+	const lineIndex = new Map(design.segmentLines.map((l, i) => [l.id, i]));
+	const sites: PixelSite[] = [];
+	const siteOf: number[] = [];
+	for (const e of design.electrodes) {
+		const c = e.common === null ? undefined : commonIndex.get(e.common);
+		const l = e.line === null ? undefined : lineIndex.get(e.line);
+		if (c === undefined || l === undefined || c >= drive.commons) {
+			siteOf.push(-1);
+			continue;
+		}
+		siteOf.push(sites.length);
+		sites.push({
+			commonIndex: c,
+			lineIndex: l,
+			onProbability: options.onProbability,
+			off_F: 0,
+			on_F: 0
+		});
+	}
+	const k = cycleEnergyCoefficients({ drive, sites });
+	return {
+		at: ({ permittivity, frameRate_Hz = drive.frameRate_Hz }) => {
+			const loads = electrodeLoads({ design, permittivity, areas_mm2 });
+			const cycle_s = cycleDuration_s(frameRate_Hz);
+			let power_W = 0;
+			const electrodes = loads.map((load, i) => {
+				const site = siteOf[i];
+				const cycleEnergy_J = site < 0 ? 0 : load.off_F * k[2 * site] + load.on_F * k[2 * site + 1];
+				power_W += cycleEnergy_J / cycle_s;
+				return { ...load, cycleEnergy_J, power_W: cycleEnergy_J / cycle_s, driven: site >= 0 };
+			});
+			return { electrodes, power_W, current_A: power_W / drive.amplitude_V };
+		}
+	};
+}
+
 export function driveLoad(options: {
 	design: Design;
 	permittivity: PixelPermittivity;
@@ -34,34 +85,5 @@ export function driveLoad(options: {
 	frameRate_Hz?: number;
 	areas_mm2?: readonly number[];
 }): DriveLoad {
-	const { design } = options;
-	const drive = design.drive;
-	const frameRate_Hz = options.frameRate_Hz ?? drive.frameRate_Hz;
-	const loads = electrodeLoads(options);
-	const commonIndex = new Map(design.commons.map((c, i) => [c.id, i]));
-	const lineIndex = new Map(design.segmentLines.map((l, i) => [l.id, i]));
-	const sites: PixelSite[] = [];
-	const siteOf: number[] = [];
-	loads.forEach((load) => {
-		const c = load.common === null ? undefined : commonIndex.get(load.common);
-		const l = load.line === null ? undefined : lineIndex.get(load.line);
-		if (c === undefined || l === undefined || c >= drive.commons) return siteOf.push(-1);
-		siteOf.push(sites.length);
-		sites.push({
-			commonIndex: c,
-			lineIndex: l,
-			onProbability: options.onProbability,
-			off_F: load.off_F,
-			on_F: load.on_F
-		});
-	});
-	const energies = cycleEnergies_J({ drive, sites });
-	const cycle_s = cycleDuration_s(frameRate_Hz);
-	const electrodes = loads.map((load, i) => {
-		const site = siteOf[i];
-		const cycleEnergy_J = site < 0 ? 0 : energies[site];
-		return { ...load, cycleEnergy_J, power_W: cycleEnergy_J / cycle_s, driven: site >= 0 };
-	});
-	const power_W = electrodes.reduce((sum, e) => sum + e.power_W, 0);
-	return { electrodes, power_W, current_A: power_W / drive.amplitude_V };
+	return prepareDriveLoad(options).at(options);
 }

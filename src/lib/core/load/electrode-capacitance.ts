@@ -23,9 +23,16 @@ export interface ElectrodeLoad {
 	on_F: number;
 }
 
+/** Areas by electrode record: records are immutable, so an edit brings a new record. */
+const AREA_CACHE = new WeakMap<Electrode, number>();
+
 export function electrodeArea_mm2(electrode: Electrode): number {
-	const area = shapeArea(electrode, { tolerance_um: AREA_TOLERANCE_um });
-	return Number.isFinite(area) ? Math.max(0, area) : 0;
+	const cached = AREA_CACHE.get(electrode);
+	if (cached !== undefined) return cached;
+	const raw = shapeArea(electrode, { tolerance_um: AREA_TOLERANCE_um });
+	const area = Number.isFinite(raw) ? Math.max(0, raw) : 0;
+	AREA_CACHE.set(electrode, area);
+	return area;
 }
 
 export function electrodeLoads(options: {
@@ -36,6 +43,16 @@ export function electrodeLoads(options: {
 }): ElectrodeLoad[] {
 	const { design, permittivity } = options;
 	const gap_um = design.cell.gap_um;
+	const off_F_per_mm2 = parallelPlateCapacitance_F({
+		area_mm2: 1,
+		gap_um,
+		permittivity: permittivity.off
+	});
+	const on_F_per_mm2 = parallelPlateCapacitance_F({
+		area_mm2: 1,
+		gap_um,
+		permittivity: permittivity.on
+	});
 	return design.electrodes.map((e, i) => {
 		const area_mm2 = options.areas_mm2?.[i] ?? electrodeArea_mm2(e);
 		return {
@@ -44,8 +61,8 @@ export function electrodeLoads(options: {
 			common: e.common,
 			line: e.line,
 			area_mm2,
-			off_F: parallelPlateCapacitance_F({ area_mm2, gap_um, permittivity: permittivity.off }),
-			on_F: parallelPlateCapacitance_F({ area_mm2, gap_um, permittivity: permittivity.on })
+			off_F: off_F_per_mm2 * area_mm2,
+			on_F: on_F_per_mm2 * area_mm2
 		};
 	});
 }

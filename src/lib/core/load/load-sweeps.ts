@@ -4,7 +4,7 @@
  * it follows the fluid's ε∥ and ε⊥ (fluid-permittivity.ts).
  */
 import type { Design } from '../design/schema';
-import { driveLoad } from './drive-load';
+import { prepareDriveLoad } from './drive-load';
 import { electrodeArea_mm2 } from './electrode-capacitance';
 import { pixelPermittivity } from './fluid-permittivity';
 import { LOAD_PATTERNS, loadSettingsOf, type LoadPattern } from './load-settings';
@@ -36,11 +36,14 @@ export function currentSweep(options: {
 	const quiescent_uA = loadSettingsOf(design).quiescent_uA;
 	const areas_mm2 = design.electrodes.map(electrodeArea_mm2);
 	const points: CurrentPoint[] = [];
+	const prepared = LOAD_PATTERNS.map((pattern) => ({
+		pattern,
+		model: prepareDriveLoad({ design, onProbability: onProbabilityOf(pattern), areas_mm2 })
+	}));
 	for (const temperature_C of options.temperatures_C) {
 		const permittivity = pixelPermittivity({ cell: design.cell, temperature_C });
-		for (const pattern of LOAD_PATTERNS) {
-			const onProbability = onProbabilityOf(pattern);
-			const base = driveLoad({ design, permittivity, onProbability, areas_mm2 });
+		for (const { pattern, model } of prepared) {
+			const base = model.at({ permittivity });
 			for (const frameRate_Hz of options.frameRates_Hz) {
 				const scale = frameRate_Hz / design.drive.frameRate_Hz;
 				points.push({

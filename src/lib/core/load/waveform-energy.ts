@@ -47,56 +47,81 @@ function scannedCommonAtStep(drive: WaveformDrive): { steps: number; slot: Int32
 	return { steps: wave.steps, slot };
 }
 
+/**
+ * Per site, the two coefficients k_off, k_on (V²) of its expected energy per cycle
+ * E = C_off·k_off + C_on·k_on: the waveform's part, independent of the capacitances, so a
+ * temperature sweep (which only rescales C) reuses it. Layout [k_off0, k_on0, k_off1, …].
+ */
+export function cycleEnergyCoefficients(options: {
+	drive: WaveformDrive;
+	sites: readonly PixelSite[];
+}): Float64Array {
+	const { drive, sites } = options;
+	const n = drive.commons;
+	const wave = multiplexWaveform(drive);
+	const { steps, slot } = scannedCommonAtStep(drive);
+	const segOn = wave.segmentLevels_V(new Array<boolean>(n).fill(true));
+	const segOff = wave.segmentLevels_V(new Array<boolean>(n).fill(false));
+	// State probability of each crossing: the first site at a crossing defines it.
+	let lines = 0;
+	for (const s of sites) lines = Math.max(lines, s.lineIndex + 1);
+	const crossingP = new Float64Array(lines * n);
+	const defined = new Uint8Array(lines * n);
+	for (const s of sites) {
+		if (s.commonIndex < 0 || s.commonIndex >= n) continue;
+		const k = s.lineIndex * n + s.commonIndex;
+		if (defined[k]) continue;
+		defined[k] = 1;
+		crossingP[k] = Math.min(1, Math.max(0, s.onProbability));
+	}
+	const out = new Float64Array(2 * sites.length);
+	for (let i = 0; i < sites.length; i++) {
+		const own = sites[i].commonIndex;
+		if (own < 0 || own >= n) continue;
+		const row = sites[i].lineIndex * n;
+		const com = wave.commonLevels_V[own];
+		const pOwn = crossingP[row + own];
+		let kOff = 0;
+		let kOn = 0;
+		for (let t = 0; t < steps; t++) {
+			const prev = t === 0 ? steps - 1 : t - 1;
+			const s0 = slot[prev];
+			const s1 = slot[t];
+			const p0 = crossingP[row + s0];
+			const p1 = crossingP[row + s1];
+			const deltaCom = com[t] - com[prev];
+			// Joint states (a: own, b: scanned at t − 1, c: scanned at t); equal crossings share a state.
+			for (let a = 0; a < 2; a++) {
+				const pa = a ? pOwn : 1 - pOwn;
+				for (let b = 0; b < 2; b++) {
+					if (s0 === own && b !== a) continue;
+					const pb = s0 === own ? 1 : b ? p0 : 1 - p0;
+					for (let c = 0; c < 2; c++) {
+						if (s1 === own && c !== a) continue;
+						if (s1 === s0 && c !== b) continue;
+						const pc = s1 === own || s1 === s0 ? 1 : c ? p1 : 1 - p1;
+						const p = pa * pb * pc;
+						if (p === 0) continue;
+						const dv = (c ? segOn[t] : segOff[t]) - (b ? segOn[prev] : segOff[prev]) - deltaCom;
+						if (a) kOn += p * 0.5 * dv * dv;
+						else kOff += p * 0.5 * dv * dv;
+					}
+				}
+			}
+		}
+		out[2 * i] = kOff;
+		out[2 * i + 1] = kOn;
+	}
+	return out;
+}
+
 /** Expected energy per cycle of each pixel site, J (same order as `sites`). */
 export function cycleEnergies_J(options: {
 	drive: WaveformDrive;
 	sites: readonly PixelSite[];
 }): Float64Array {
-	const { drive, sites } = options;
-	const wave = multiplexWaveform(drive);
-	const { steps, slot } = scannedCommonAtStep(drive);
-	const segOn = wave.segmentLevels_V(new Array<boolean>(drive.commons).fill(true));
-	const segOff = wave.segmentLevels_V(new Array<boolean>(drive.commons).fill(false));
-	// State probability of each crossing: the first site at a crossing defines it.
-	const crossing = new Map<number, number>();
-	const key = (line: number, common: number) => line * drive.commons + common;
-	for (const s of sites) {
-		const k = key(s.lineIndex, s.commonIndex);
-		if (!crossing.has(k)) crossing.set(k, Math.min(1, Math.max(0, s.onProbability)));
-	}
-	const energies = new Float64Array(sites.length);
-	const vars: number[] = [];
-	const probs: number[] = [];
-	sites.forEach((site, index) => {
-		if (site.commonIndex < 0 || site.commonIndex >= drive.commons) return;
-		const com = wave.commonLevels_V[site.commonIndex];
-		let energy = 0;
-		for (let t = 0; t < steps; t++) {
-			const prev = (t + steps - 1) % steps;
-			vars.length = 0;
-			probs.length = 0;
-			for (const c of [site.commonIndex, slot[prev], slot[t]]) {
-				if (vars.includes(c)) continue;
-				vars.push(c);
-				probs.push(crossing.get(key(site.lineIndex, c)) ?? 0);
-			}
-			const count = vars.length;
-			const at = (mask: number, common: number) => (mask >> vars.indexOf(common)) & 1;
-			const deltaCom = com[t] - com[prev];
-			for (let mask = 0; mask < 1 << count; mask++) {
-				let p = 1;
-				for (let v = 0; v < count; v++) p *= (mask >> v) & 1 ? probs[v] : 1 - probs[v];
-				if (p === 0) continue;
-				const segNow = at(mask, slot[t]) ? segOn[t] : segOff[t];
-				const segBefore = at(mask, slot[prev]) ? segOn[prev] : segOff[prev];
-				const dv = segNow - segBefore - deltaCom;
-				const c = at(mask, site.commonIndex) ? site.on_F : site.off_F;
-				energy += p * 0.5 * c * dv * dv;
-			}
-		}
-		energies[index] = energy;
-	});
-	return energies;
+	const k = cycleEnergyCoefficients(options);
+	return Float64Array.from(options.sites, (s, i) => s.off_F * k[2 * i] + s.on_F * k[2 * i + 1]);
 }
 
 /** Duration of the waveform's full DC-balanced cycle: two frames. */
