@@ -14,6 +14,11 @@ test('the load tab shows current, battery life, per-pin tables and plots; a budg
 	await expect(page.getByTestId('battery-life')).toHaveText('—');
 	await page.getByTestId('battery-input').fill('220');
 	await expect(page.getByTestId('battery-life')).toContainText('years');
+	// Load settings are part of the design: undo takes the edit back.
+	await page.getByRole('button', { name: 'Undo' }).click();
+	await expect(page.getByTestId('battery-life')).not.toContainText('years');
+	await page.getByTestId('battery-input').fill('220');
+	await expect(page.getByTestId('battery-life')).toContainText('years');
 	await page.getByTestId('budget-input').fill('1');
 	await expect(page.getByTestId('load-verdict')).toContainText('over the 1 µA budget');
 	await expect(page.getByTestId('overall')).toHaveText('Fails checks');

@@ -87,6 +87,10 @@ describe('load report of a design', () => {
 		expect(slow.findings.find((f) => f.code === 'load.rc-too-slow')?.electrodes).toEqual([
 			d.electrodes[0].id
 		]);
+		for (const f of [...marginal.findings, ...slow.findings]) {
+			expect(isKnownFindingCode(f.code), f.code).toBe(true);
+			expect(f.fix).not.toBe('');
+		}
 	});
 
 	it('names a trace to an unknown electrode by its path', () => {
