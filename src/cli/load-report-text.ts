@@ -49,8 +49,13 @@ export function loadSummaryLines(report: LoadReport): string[] {
 	return formatTable(rows).split('\n');
 }
 
-export function loadReportLines(report: LoadReport): string[] {
+export function loadReportLines(
+	report: LoadReport,
+	options: { perElectrode?: boolean } = {}
+): string[] {
 	const lines = [...loadSummaryLines(report), ''];
+	if (options.perElectrode)
+		lines.push(...formatTable(pinRows('electrode', report.electrodes)).split('\n'), '');
 	lines.push(...formatTable(pinRows('line', report.lines)).split('\n'), '');
 	lines.push(...formatTable(pinRows('common', report.commons)).split('\n'), '');
 	if (report.traces.length > 0) {

@@ -29,4 +29,13 @@ test('the load tab shows current, battery life, per-pin tables and plots; a budg
 	);
 	await page.getByTestId('budget-input').fill('0');
 	await expect(page.getByTestId('load-verdict')).toContainText('The display draws');
+	// A long hair-thin ITO trace: 100 Ω/□ × 1000 mm / 0.001 mm = 100 MΩ cannot settle in its slot.
+	await page.getByTestId('add-trace').click();
+	await expect(page.getByTestId('trace-result-0')).toContainText('10000 Ω');
+	await page.getByTestId('trace-length-0').fill('1000');
+	await page.getByTestId('trace-width-0').fill('0.001');
+	await expect(page.getByTestId('trace-result-0')).toContainText('100000000 Ω');
+	await expect(
+		page.getByTestId('load-verdict').locator('[data-code="load.rc-too-slow"]')
+	).toBeVisible();
 });

@@ -8,7 +8,7 @@ import { loadReportLines } from '../load-report-text';
 import { parseNumber } from '../parse-numbers';
 import { readDesignFile } from '../read-design';
 
-export const LOAD_HELP = `Usage: sunglyph load <design.json> [--pattern P] [--battery-mAh N] [--json]
+export const LOAD_HELP = `Usage: sunglyph load <design.json> [--pattern P] [--battery-mAh N] [--per-electrode] [--json]
 
 Electrical load of the display: capacitance per electrode, segment line and common (from the
 real electrode areas and the fluid's ε⊥/ε∥), drive power and current over the real multiplexed
@@ -18,6 +18,7 @@ Exit status: 0 within limits, 1 a load check fails (budget, trace settling), 2 b
 
   --pattern all-on|all-off|reading   picture shown            (default: the design's, else reading)
   --battery-mAh N                    battery capacity         (default: the design's, else none)
+  --per-electrode                    also list every electrode's area, capacitance and current
   --json                             print the report as JSON
   -h, --help                         show this help`;
 
@@ -29,6 +30,7 @@ export async function runLoad(args: string[], io: CliIo): Promise<number> {
 		options: {
 			pattern: { type: 'string' },
 			'battery-mAh': { type: 'string' },
+			'per-electrode': { type: 'boolean' },
 			json: { type: 'boolean' },
 			help: { type: 'boolean', short: 'h' }
 		}
@@ -57,7 +59,11 @@ export async function runLoad(args: string[], io: CliIo): Promise<number> {
 	io.out(
 		values.json
 			? JSON.stringify(report, null, 2) + '\n'
-			: [design.design.name, '', ...loadReportLines(report)].join('\n') + '\n'
+			: [
+					design.design.name,
+					'',
+					...loadReportLines(report, { perElectrode: values['per-electrode'] })
+				].join('\n') + '\n'
 	);
 	return report.severity === 'fail' ? EXIT.checkFailed : EXIT.ok;
 }
