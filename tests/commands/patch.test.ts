@@ -152,6 +152,7 @@ describe('document fields', () => {
 			'drive',
 			'glass',
 			'lighting',
+			'load',
 			'name',
 			'pinout',
 			'rules',

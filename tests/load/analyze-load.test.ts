@@ -141,3 +141,19 @@ describe('load report of a design', () => {
 		);
 	});
 });
+
+describe('load settings in the edit history', () => {
+	it('undoing the first load edit restores a design without a load section', async () => {
+		const { diffDesigns } = await import('../../src/lib/core/commands/diff-design');
+		const { applyPatch } = await import('../../src/lib/core/commands/patch');
+		const { invertPatch } = await import('../../src/lib/core/commands/patch-algebra');
+		const before = demoDesign();
+		expect('load' in before).toBe(false);
+		const after = withLoad({ battery_mAh: 220 });
+		const patch = diffDesigns(before, after);
+		expect(Object.keys(patch.fields ?? {})).toEqual(['load']);
+		const undone = applyPatch(after, invertPatch(patch));
+		expect(undone).toStrictEqual(before);
+		expect('load' in undone).toBe(false);
+	});
+});
