@@ -27,6 +27,8 @@ import { analyzeCell as cellReportOf } from '../src/lib/core/cell/analyze-cell';
 import { analyzeLegibility } from '../src/lib/core/legibility/analyze-legibility';
 import { legibilityMap } from '../src/lib/core/legibility/legibility-map';
 import { viewAngleBenchmarks } from './view-angle-bench';
+import { analyzeLoad } from '../src/lib/core/load/analyze-load';
+import { loadBenchDesign } from './load-design';
 
 interface Row {
 	name: string;
@@ -196,6 +198,23 @@ rows.push(
 );
 
 for (const b of viewAngleBenchmarks(demo)) rows.push(measure(b.name, b.target_ms, b.runs, b.body));
+const fresh = (d: typeof demo) => ({ ...d, electrodes: d.electrodes.map((e) => ({ ...e })) });
+rows.push(
+	measure('electrical load of the demo, areas flattened afresh', null, 100, () =>
+		analyzeLoad(fresh(demo))
+	)
+);
+const bigLoad = loadBenchDesign(500);
+rows.push(
+	measure('electrical load, 500 electrodes, areas flattened afresh', null, 20, () =>
+		analyzeLoad(fresh(bigLoad))
+	)
+);
+rows.push(
+	measure('electrical load, 500 electrodes, areas known (an edit)', null, 40, () =>
+		analyzeLoad(bigLoad)
+	)
+);
 
 const pad = (text: string, width: number) => text.padEnd(width);
 console.log(`Node ${process.version}, ${new Date().toISOString()}`);

@@ -15,6 +15,7 @@ import { runAssign } from './commands/assign';
 import { runPins } from './commands/pins';
 import { runLegibility } from './commands/legibility';
 import { runViewAngle } from './commands/view-angle';
+import { runLoad } from './commands/load';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -29,6 +30,7 @@ Commands:
   report FILE  write the printable design report (HTML, or PDF with --pdf)
   legibility FILE  light scenarios, contrast with glare, visual angle, threshold, verdicts
   view-angle FILE  contrast over viewing directions, best direction, parallax shadow
+  load FILE    capacitance, drive current, battery life and ITO trace settling of a design
   demo         write the demo design to stdout
   assign FILE  wire a design automatically for N commons (--commons N [--out FILE])
   pins FILE    pin map along the glass edge; --csv, --header (C) or --segments (CSV)
@@ -47,6 +49,7 @@ const COMMANDS: Record<string, Command> = {
 	pins: runPins,
 	legibility: runLegibility,
 	'view-angle': runViewAngle
+	load: runLoad,
 };
 
 const processIo: CliIo = {

@@ -153,6 +153,7 @@ describe('document fields', () => {
 			'glass',
 			'legibility',
 			'lighting',
+			'load',
 			'name',
 			'orientation',
 			'pinout',

@@ -9,6 +9,7 @@ import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
 import { legibilityLines } from '../legibility-text';
+import { loadSummaryLines } from '../load-report-text';
 
 export const CAUTION =
 	'Predictions are models. Where a misreading can hurt someone, confirm with measured samples\n' +
@@ -76,6 +77,9 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 			lines.push('', 'Legibility');
 			lines.push(...legibilityLines(report.legibility).map((l) => (l ? `  ${l}` : l)));
 		}
+		lines.push('', 'Load');
+		lines.push(...loadSummaryLines(report.load).map((l) => `  ${l}`));
+		for (const f of report.load.findings) lines.push(...findingLines(f).map((l) => `  ${l}`));
 		lines.push(
 			'',
 			`Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`

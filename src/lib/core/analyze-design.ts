@@ -18,6 +18,7 @@ import { analyzeCell, type CellReport } from './cell/analyze-cell';
 import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
 import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-legibility';
 import { orientationFindings } from './viewangle/orientation-findings';
+import { analyzeLoad, type LoadReport } from './load/analyze-load';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -34,6 +35,8 @@ export interface DesignReport {
 	thresholdSource: 'entered' | 'cell model';
 	/** Every light scenario judged; null until the cell report exists. */
 	legibility: LegibilityReport | null;
+	/** Electrical load: capacitance, current, battery life, trace settling. */
+	load: LoadReport;
 	severity: Severity;
 }
 
@@ -50,6 +53,7 @@ export function analyzeDesign(
 		thresholds: useModel ? cell.thresholds : design.thresholds
 	});
 	const rules = checkDesignRules(design);
+	const load = analyzeLoad(design);
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
@@ -79,12 +83,14 @@ export function analyzeDesign(
 		rules,
 		thresholdSource: useModel ? 'cell model' : 'entered',
 		legibility,
+		load,
 		severity: overallSeverity([
 			...wiring.findings,
 			...drive.findings,
 			...cellFindings,
 			...rules.findings,
-			...(legibility?.findings ?? [])
+			...(legibility?.findings ?? []),
+			...load.findings
 		])
 	};
 }

@@ -107,7 +107,10 @@ export function applyPatch(design: Design, patch: Patch): Design {
 	const fields = patch.fields ?? {};
 	for (const field of DOCUMENT_FIELDS) {
 		const change = fields[field];
-		if (change) (next as Record<DocumentField, unknown>)[field] = change[1];
+		if (!change) continue;
+		// An optional section taken back to "absent" leaves no key behind.
+		if (change[1] === undefined) delete (next as Partial<Record<DocumentField, unknown>>)[field];
+		else (next as Record<DocumentField, unknown>)[field] = change[1];
 	}
 	return next;
 }

@@ -15,6 +15,7 @@ import { cellSchema, lightingSchema } from './cell-schema';
 import { pinoutSchema, rulesSchema } from './rules-schema';
 import { legibilitySchema } from './legibility-schema';
 import { orientationSchema } from './orientation-schema';
+import { loadSettingsSchema } from '../load/load-settings';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
 export const DESIGN_VERSION = 5;
@@ -129,7 +130,9 @@ export const designSchema = z.strictObject({
 	rules: rulesSchema,
 	pinout: pinoutSchema,
 	legibility: legibilitySchema,
-	orientation: orientationSchema
+	orientation: orientationSchema,
+	/** Optional electrical-load inputs (battery, budget, ITO traces); defaults when absent. */
+	load: loadSettingsSchema.optional()
 });
 
 export type Point = z.infer<typeof pointSchema>;

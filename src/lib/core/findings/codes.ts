@@ -7,6 +7,7 @@ import { WIRING_CODES } from './codes-wiring';
 import { RULE_CODES } from './codes-rules';
 import { LEGIBILITY_CODES } from './codes-legibility';
 import { VIEW_ANGLE_CODES } from './codes-viewangle';
+import { LOAD_CODES } from './codes-load';
 
 export interface FindingCode {
 	code: string;
@@ -18,8 +19,9 @@ export const FINDING_CODES: readonly FindingCode[] = [
 	...WIRING_CODES,
 	...RULE_CODES,
 	...LEGIBILITY_CODES,
-	...VIEW_ANGLE_CODES
+	...VIEW_ANGLE_CODES,
 ];
+export const FINDING_CODES: readonly FindingCode[] = [...DRIVE_AND_OPTICS_CODES, ...LOAD_CODES];
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));
 
