@@ -9,6 +9,7 @@ export default ts.config(
 		ignores: [
 			'build/',
 			'build-test/',
+			'dist/',
 			'.svelte-kit/',
 			'node_modules/',
 			'test-results/',

@@ -1,15 +1,11 @@
 /**
  * The sunglyph command line: parses arguments, calls the core, prints. One error handler maps
- * every failure to a one-line message on stderr and an exit code.
+ * every failure to a one-line message on stderr and an exit code. Each command's module is
+ * loaded only when that command runs, so a quick drive calculation never loads the cell model.
  */
 import { readFile } from 'node:fs/promises';
 import { CliError, EXIT } from './cli-error';
 import type { CliIo } from './io';
-import { runDrive } from './commands/drive';
-import { runCheck } from './commands/check';
-import { runDemo } from './commands/demo';
-import { runCell } from './commands/cell';
-import { runIlluminant } from './commands/illuminant';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -26,12 +22,12 @@ Commands:
 Run "sunglyph <command> --help" for a command's options.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
-const COMMANDS: Record<string, Command> = {
-	drive: runDrive,
-	cell: runCell,
-	illuminant: runIlluminant,
-	check: runCheck,
-	demo: runDemo
+const COMMANDS: Record<string, () => Promise<Command>> = {
+	drive: async () => (await import('./commands/drive')).runDrive,
+	cell: async () => (await import('./commands/cell')).runCell,
+	illuminant: async () => (await import('./commands/illuminant')).runIlluminant,
+	check: async () => (await import('./commands/check')).runCheck,
+	demo: async () => (await import('./commands/demo')).runDemo
 };
 
 const processIo: CliIo = {
@@ -46,12 +42,13 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 		io.out(MAIN_HELP + '\n');
 		return name === undefined ? EXIT.badInput : EXIT.ok;
 	}
-	const command = COMMANDS[name];
-	if (!command) {
+	const load = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;
+	if (!load) {
 		io.err(`sunglyph: unknown command "${name}" (commands: ${Object.keys(COMMANDS).join(', ')})\n`);
 		return EXIT.badInput;
 	}
 	try {
+		const command = await load();
 		return await command(joinNegativeValues(rest), io);
 	} catch (error) {
 		if (error instanceof CliError) {
@@ -66,6 +63,10 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 			io.err(`sunglyph ${name}: ${error.message}\n`);
 			return EXIT.badInput;
 		}
-		throw error;
+		const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
+		io.err(
+			`sunglyph ${name}: internal error — this is a fault in sunglyph, not in the input:\n${detail}\n`
+		);
+		return EXIT.internal;
 	}
 }

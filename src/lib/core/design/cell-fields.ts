@@ -8,8 +8,6 @@
  * Defaults describe a typical reflective 90° TN meter cell (common practice): 5 µm gap, 2°
  * rubbed-polyimide pretilt and a small chiral dose d/p = 0.1 that fixes the twist sense.
  */
-import { z } from 'zod';
-
 export interface QuantityField {
 	/** Field name in the document. */
 	key: string;
@@ -151,12 +149,4 @@ export function inRange(field: QuantityField, value: number): boolean {
 export function rangeRule(field: QuantityField): string {
 	const limits = field.maxExclusive ? ', the maximum excluded' : '';
 	return `expected ${field.noun} from ${rangeText(field)}${limits}`;
-}
-
-/** A zod schema for the field: a finite number inside its range. */
-export function quantitySchema(field: QuantityField) {
-	return z
-		.number()
-		.refine(Number.isFinite, 'expected a finite number')
-		.refine((v) => inRange(field, v), rangeRule(field));
 }

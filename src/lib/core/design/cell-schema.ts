@@ -6,7 +6,8 @@
  * transmittances are fractions 0…1.
  */
 import { z } from 'zod';
-import { CELL_FIELDS, LIGHTING_FIELDS, quantitySchema } from './cell-fields';
+import { CELL_FIELDS, LIGHTING_FIELDS } from './cell-fields';
+import { quantitySchema } from './quantity-schema';
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
