@@ -2,6 +2,7 @@ import { defineConfig } from '@playwright/test';
 
 // PW_PORT lets several checkouts run their browser flows side by side.
 const PORT = Number(process.env.PW_PORT ?? 4319);
+export const TEST_BUILD_DIR = 'build-test';
 
 export default defineConfig({
 	testDir: 'tests/browser',
@@ -26,7 +27,9 @@ export default defineConfig({
 		}
 	},
 	webServer: {
-		command: `npm run build && PORT=${PORT} HOST=127.0.0.1 node build/index.js`,
+		// Its own build folder: rebuilding build/ under a running `npm start` is never needed.
+		command: `npm run build && PORT=${PORT} HOST=127.0.0.1 node scripts/serve.js`,
+		env: { SUNGLYPH_BUILD_DIR: TEST_BUILD_DIR },
 		url: `http://127.0.0.1:${PORT}`,
 		reuseExistingServer: !process.env.CI,
 		timeout: 180_000

@@ -4,7 +4,8 @@ import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
 /** @type {import('@sveltejs/kit').Config} */
 const config = {
 	preprocess: vitePreprocess(),
-	kit: { adapter: adapter() },
+	// SUNGLYPH_BUILD_DIR lets the browser tests build into a folder of their own.
+	kit: { adapter: adapter({ out: process.env.SUNGLYPH_BUILD_DIR ?? 'build' }) },
 	compilerOptions: { runes: true }
 };
 

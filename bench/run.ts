@@ -245,3 +245,6 @@ console.log(
 		`(${kept.curves.length} curves; total heap ${after_MB.toFixed(1)} MB, RSS ${(process.memoryUsage().rss / 2 ** 20).toFixed(0)} MB` +
 		`${gc ? '' : '; run with node --expose-gc for a settled figure'})`
 );
+
+// Start-up of the command line, beside a bare Node start.
+await import('./cli');

@@ -1,21 +1,11 @@
 /**
  * The sunglyph command line: parses arguments, calls the core, prints. One error handler maps
- * every failure to a one-line message on stderr and an exit code.
+ * every failure to a one-line message on stderr and an exit code. Each command's module is
+ * loaded only when that command runs, so a quick drive calculation never loads the cell model.
  */
 import { readFile } from 'node:fs/promises';
 import { CliError, EXIT } from './cli-error';
 import type { CliIo } from './io';
-import { runDrive } from './commands/drive';
-import { runCheck } from './commands/check';
-import { runDemo } from './commands/demo';
-import { runCell } from './commands/cell';
-import { runIlluminant } from './commands/illuminant';
-import { runReport } from './commands/report';
-import { runAssign } from './commands/assign';
-import { runPins } from './commands/pins';
-import { runLegibility } from './commands/legibility';
-import { runViewAngle } from './commands/view-angle';
-import { runLoad } from './commands/load';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -23,33 +13,33 @@ export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glas
 Usage: sunglyph <command> [options]
 
 Commands:
-  drive        RMS levels, selection ratio and Alt–Pleshko limit of a multiplexed drive
-  cell         evaluate a reflective TN cell: transmission, V10/V50/V90, colours
-  illuminant   X, Y, Z and x, y of a CIE illuminant's white
-  check FILE   validate a design; check its wiring, drive and optics
-  report FILE  write the printable design report (HTML, or PDF with --pdf)
+  drive            RMS levels, selection ratio and Alt–Pleshko limit of a multiplexed drive
+  cell             evaluate a reflective TN cell: transmission, V10/V50/V90, colours
+  illuminant       X, Y, Z and x, y of a CIE illuminant's white
+  check FILE       validate a design; check wiring, rules, drive, optics, load, legibility
+  assign FILE      wire a design automatically for N commons (--commons N [--out FILE])
+  pins FILE        pin map along the glass edge; --csv, --header (C) or --segments (CSV)
+  load FILE        capacitance, drive current, battery life and ITO trace settling
   legibility FILE  light scenarios, contrast with glare, visual angle, threshold, verdicts
   view-angle FILE  contrast over viewing directions, best direction, parallax shadow
-  load FILE    capacitance, drive current, battery life and ITO trace settling of a design
-  demo         write the demo design to stdout
-  assign FILE  wire a design automatically for N commons (--commons N [--out FILE])
-  pins FILE    pin map along the glass edge; --csv, --header (C) or --segments (CSV)
+  report FILE      write the printable design report (HTML, or PDF with --pdf)
+  demo             write the demo design to stdout
 
 Run "sunglyph <command> --help" for a command's options.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
-const COMMANDS: Record<string, Command> = {
-	drive: runDrive,
-	cell: runCell,
-	illuminant: runIlluminant,
-	check: runCheck,
-	report: runReport,
-	demo: runDemo,
-	assign: runAssign,
-	pins: runPins,
-	legibility: runLegibility,
-	'view-angle': runViewAngle
-	load: runLoad,
+const COMMANDS: Record<string, () => Promise<Command>> = {
+	drive: async () => (await import('./commands/drive')).runDrive,
+	cell: async () => (await import('./commands/cell')).runCell,
+	illuminant: async () => (await import('./commands/illuminant')).runIlluminant,
+	check: async () => (await import('./commands/check')).runCheck,
+	demo: async () => (await import('./commands/demo')).runDemo,
+	report: async () => (await import('./commands/report')).runReport,
+	assign: async () => (await import('./commands/assign')).runAssign,
+	pins: async () => (await import('./commands/pins')).runPins,
+	legibility: async () => (await import('./commands/legibility')).runLegibility,
+	'view-angle': async () => (await import('./commands/view-angle')).runViewAngle,
+	load: async () => (await import('./commands/load')).runLoad
 };
 
 const processIo: CliIo = {
@@ -64,12 +54,13 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 		io.out(MAIN_HELP + '\n');
 		return name === undefined ? EXIT.badInput : EXIT.ok;
 	}
-	const command = COMMANDS[name];
-	if (!command) {
+	const load = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;
+	if (!load) {
 		io.err(`sunglyph: unknown command "${name}" (commands: ${Object.keys(COMMANDS).join(', ')})\n`);
 		return EXIT.badInput;
 	}
 	try {
+		const command = await load();
 		return await command(joinNegativeValues(rest), io);
 	} catch (error) {
 		if (error instanceof CliError) {
@@ -84,6 +75,10 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 			io.err(`sunglyph ${name}: ${error.message}\n`);
 			return EXIT.badInput;
 		}
-		throw error;
+		const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
+		io.err(
+			`sunglyph ${name}: internal error — this is a fault in sunglyph, not in the input:\n${detail}\n`
+		);
+		return EXIT.internal;
 	}
 }

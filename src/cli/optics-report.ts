@@ -81,15 +81,15 @@ export function opticsLines(report: DesignReport): string[] {
 	if (!cell) return [`FAIL  ${report.cellError ?? 'the cell was not evaluated'}`];
 	const lines = [
 		`at ${cell.room_C} °C, ${report.drive.isStatic ? 'static' : `1/${report.drive.commons} duty`} drive:`,
-		formatTable([
+		...formatTable([
 			PIXEL_TABLE_HEAD,
 			pixelRow('background', cell.background),
 			pixelRow('off segment', cell.off),
 			pixelRow('on segment', cell.on)
-		]),
+		]).split('\n'),
 		`contrast off:on ${fixed(cell.contrastRatio, 2)}, background:on ${fixed(cell.backgroundContrastRatio, 2)}, ΔE00 ${fixed(cell.deltaE00, 1)}, ghost ΔE00 ${fixed(cell.ghostDeltaE00, 2)}`,
 		'',
-		formatTable([
+		...formatTable([
 			['T (°C)', 'V10', 'V50', 'V90', 'τ_on', 'τ_off'],
 			...cell.curves.map((c) => {
 				const r = cell.response.rows.find((x) => x.temperature_C === c.temperature_C);
@@ -104,7 +104,7 @@ export function opticsLines(report: DesignReport): string[] {
 					ms(r?.times?.tauOff_s)
 				];
 			})
-		]),
+		]).split('\n'),
 		`switching voltages for the drive check: ${report.thresholdSource}`
 	];
 	for (const f of cell.findings) lines.push(...findingLines(f));

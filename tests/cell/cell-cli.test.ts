@@ -22,6 +22,11 @@ describe('sunglyph cell', () => {
 					'cell',
 					'--twist',
 					'90',
+					// The textbook cell: no pretilt, no chiral dopant.
+					'--pretilt-deg',
+					'0',
+					'--d-over-p',
+					'0',
 					'--gap-um',
 					String(gap),
 					'--delta-n',
@@ -60,8 +65,10 @@ describe('sunglyph cell', () => {
 
 	it('names the parameter on bad input', async () => {
 		for (const [argv, pattern] of [
-			[['--gap-um', '-3'], /--gap-um: expected a number greater than 0/],
-			[['--twist', '300'], /--twist: expected a twist from 0 to 270/],
+			[['--gap-um', '-3'], /--gap-um: expected a cell gap from 0.5 to 50 µm/],
+			[['--twist', '300'], /--twist: expected a twist from 0 to 270°/],
+			[['--d-over-p', '3'], /--d-over-p: expected a chiral dose d\/p from -2 to 2/],
+			[['--polarizer', 'custom'], /--polarizer custom needs --polarizer-k1 and --polarizer-k2/],
 			[['--material', 'unobtainium'], /--material: unknown preset "unobtainium"/],
 			[['--delta-n', 'NaN'], /--delta-n: "NaN" is not a number/],
 			[['--illuminant', 'F7'], /--illuminant: Unknown illuminant "F7"/],

@@ -29,8 +29,11 @@ describe('operating window', () => {
 		// By hand: √(3.126351708 · 3.585) = 3.347830771 V.
 		expect(r.window.best_V!).toBeCloseTo(3.347830771, 8);
 		expect(r.severity).toBe('pass');
-		// Smallest margin: off pixels at 60 °C, V10 = 1.195 V against V_off = 3.3/3 V.
-		expect(r.window.margin_V).toBeCloseTo(Math.min(3.3 / Math.sqrt(3) - 1.805, 1.195 - 1.1), 9);
+		// Tightest margin relative to its threshold: on pixels at −10 °C, V_on = 3.3/√3 V against
+		// V90 = 1.805 V (5.5 %); off pixels at 60 °C have 0.095 V of V10 = 1.195 V (7.9 %).
+		expect(r.window.margin_V).toBeCloseTo(3.3 / Math.sqrt(3) - 1.805, 9);
+		expect(r.window.margin_percent).toBeCloseTo((100 * (3.3 / Math.sqrt(3) - 1.805)) / 1.805, 9);
+		expect(r.window.tightest).toEqual({ temperature_C: -10, limit: 'on' });
 	});
 
 	it('says when no amplitude can work at a temperature (steepness beyond the selection ratio)', () => {

@@ -10,6 +10,8 @@ import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
 import { legibilityLines } from '../legibility-text';
 import { loadSummaryLines } from '../load-report-text';
+import { fileErrorText } from '../file-error-text';
+import { helpRows } from '../help-table';
 
 export const CAUTION =
 	'Predictions are models. Where a misreading can hurt someone, confirm with measured samples\n' +
@@ -23,8 +25,10 @@ multiplexed drive over the operating temperature range.
 
 Exit status: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input.
 
-  --json       print the full report as JSON
-  -h, --help   show this help`;
+${helpRows([
+	{ flag: '--json', text: 'print the full report as JSON' },
+	{ flag: '-h, --help', text: 'show this help' }
+])}`;
 
 export async function runCheck(args: string[], io: CliIo): Promise<number> {
 	const { values, positionals } = parseArgs({
@@ -44,8 +48,7 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 	try {
 		text = await io.readFile(path);
 	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
+		throw new CliError(`cannot read ${path}: ${fileErrorText(error)}`);
 	}
 	const parsed = parseDesignText(text);
 	if (!parsed.ok) {

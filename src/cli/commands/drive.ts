@@ -5,21 +5,30 @@ import { parseBias, parseInteger, parseNumber } from '../parse-numbers';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
+import { helpRows } from '../help-table';
 
 export const DRIVE_HELP = `Usage: sunglyph drive --commons N --bias 1/a --volts V [options]
 
 RMS voltages, selection ratio and the Alt–Pleshko limit of a multiplexed segment drive.
 
-  --commons N        number of commons (duty 1/N); 1 is static drive        (required)
-  --bias 1/a         bias, e.g. 1/3 (non-integer divisors allowed)          (default 1/3)
-  --volts V          drive amplitude (LCD supply) in volts                  (required)
-  --v10 V --v90 V    the cell's 10 % and 90 % voltages at the reference temperature: adds
-                     the operating window and a verdict
-  --reference-c T    reference temperature of --v10/--v90 in °C             (default 25)
-  --tc-mv-per-k K    temperature coefficient of V10/V90 in mV/K             (default 0)
-  --min-c T --max-c T operating temperature range in °C                    (default the reference)
-  --json             print a JSON object instead of a table
-  -h, --help         show this help`;
+${helpRows([
+	{ flag: '--commons N', text: 'number of commons (duty 1/N); 1 is static drive (required)' },
+	{ flag: '--bias 1/a', text: 'bias, e.g. 1/3 (non-integer divisors allowed)', default: '1/3' },
+	{ flag: '--volts V', text: 'drive amplitude (LCD supply) in volts (required)' },
+	{
+		flag: '--v10 V --v90 V',
+		text: "the cell's 10 % and 90 % voltages at the reference temperature: adds the operating window and a verdict"
+	},
+	{ flag: '--reference-c T', text: 'reference temperature of --v10/--v90 in °C', default: '25' },
+	{ flag: '--tc-mv-per-k K', text: 'temperature coefficient of V10/V90 in mV/K', default: '0' },
+	{
+		flag: '--min-c T --max-c T',
+		text: 'operating temperature range in °C',
+		default: 'the reference temperature'
+	},
+	{ flag: '--json', text: 'print a JSON object instead of a table' },
+	{ flag: '-h, --help', text: 'show this help' }
+])}`;
 
 export function runDrive(args: string[], io: CliIo): number {
 	const { values } = parseArgs({

@@ -7,11 +7,18 @@ import { observerName } from '../../lib/core/cell/cell-optics';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { formatTable } from '../table';
+import { helpRows } from '../help-table';
 
 export const ILLUMINANT_HELP = `Usage: sunglyph illuminant <name> [--observer 2|10] [--json]
 
 X, Y, Z (Y = 100) and x, y of a CIE illuminant's white, integrated over 380–780 nm in 5 nm steps.
-Names: A, D50, D65, D<cct> such as D75, F2, F11, E.`;
+Names: A, D50, D65, D<cct> such as D75, F2, F11, E.
+
+${helpRows([
+	{ flag: '--observer 2|10', text: 'CIE 1931 2° or CIE 1964 10° observer', default: '2' },
+	{ flag: '--json', text: 'print JSON' },
+	{ flag: '-h, --help', text: 'show this help' }
+])}`;
 
 export function runIlluminant(args: string[], io: CliIo): number {
 	const { values, positionals } = parseArgs({

@@ -26,6 +26,8 @@ export class AutosaveSession {
 	/** True once saved work has been looked for and changes are being kept. */
 	armed = $state(false);
 	#doc: DesignState;
+	/** The document serial of the recovered work: a later Open makes the notice moot. */
+	#recoveredSerial = -1;
 	#demoText = serializeDesign(demoDesign());
 	#saver = createDebouncedSaver<Snapshot>({
 		delay_ms: AUTOSAVE_DELAY_ms,
@@ -47,13 +49,18 @@ export class AutosaveSession {
 		const work = await loadWorking();
 		if (work && work.text !== serializeDesign(this.#doc.design)) {
 			this.#doc.replaceDocument(work.design, work.fileName);
+			this.#recoveredSerial = this.#doc.documentSerial;
 			this.recovered = { savedAt: work.savedAt, fileName: work.fileName };
 		}
 		this.armed = true;
 	}
 
-	/** Call on every change of the open design. */
-	observe(design: Design, fileName: string): void {
+	/**
+	 * Call on every change of the open design. Opening another document answers the recovery
+	 * notice: the recovered work is no longer what is open, so Discard must not replace it.
+	 */
+	observe(design: Design, fileName: string, documentSerial = this.#doc.documentSerial): void {
+		if (this.recovered && documentSerial !== this.#recoveredSerial) this.recovered = null;
 		if (this.armed) this.#saver.schedule({ design, fileName });
 	}
 
@@ -66,7 +73,9 @@ export class AutosaveSession {
 	}
 
 	discard(): void {
+		const stillOpen = this.recovered !== null && this.#doc.documentSerial === this.#recoveredSerial;
 		this.recovered = null;
+		if (!stillOpen) return;
 		this.#saver.cancel();
 		this.#doc.replaceDocument(demoDesign(), 'demo.sunglyph.json');
 		void clearWorking();

@@ -6,6 +6,8 @@
  * transmittances are fractions 0…1.
  */
 import { z } from 'zod';
+import { CELL_FIELDS, LIGHTING_FIELDS } from './cell-fields';
+import { quantitySchema } from './quantity-schema';
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
@@ -61,42 +63,47 @@ export const reflectorChoiceSchema = z.strictObject({
 
 export const cellSchema = z.strictObject({
 	material: materialChoiceSchema,
-	gap_um: positive(),
-	twist_deg: finite().refine((v) => v >= 0 && v <= 270, 'expected a twist from 0 to 270°'),
-	pretilt_deg: finite().refine((v) => v >= 0 && v < 45, 'expected a pretilt from 0 to 45°'),
+	gap_um: quantitySchema(CELL_FIELDS.gap_um),
+	twist_deg: quantitySchema(CELL_FIELDS.twist_deg),
+	pretilt_deg: quantitySchema(CELL_FIELDS.pretilt_deg),
 	/** Gap-to-pitch ratio d/p of the chiral dopant. */
-	gapToPitch: finite().refine((v) => Math.abs(v) <= 2, 'expected |d/p| of at most 2'),
+	gapToPitch: quantitySchema(CELL_FIELDS.gapToPitch),
 	/** Positive: dark segments on a light ground; negative: light segments on a dark ground. */
 	mode: z.enum(['positive', 'negative']),
 	polarizer: polarizerChoiceSchema,
 	reflector: reflectorChoiceSchema,
-	frontSurfaceReflectance: fraction(),
+	frontSurfaceReflectance: quantitySchema(CELL_FIELDS.frontSurfaceReflectance),
 	/** Switching slower than this (e.g. when cold) is flagged. */
-	switchingLimit_s: positive()
+	switchingLimit_s: quantitySchema(CELL_FIELDS.switchingLimit_s)
 });
 
 export const lightingSchema = z.strictObject({
 	/** 'A', 'D50', 'D65', 'D<cct>' such as 'D75', 'F2', 'F11' or 'E'. */
 	illuminant: z.string().min(1),
 	observer: z.union([z.literal(2), z.literal(10)]),
-	illuminance_lx: positive()
+	illuminance_lx: quantitySchema(LIGHTING_FIELDS.illuminance_lx)
 });
 
 export type CellSettings = z.infer<typeof cellSchema>;
 export type Lighting = z.infer<typeof lightingSchema>;
 export type CustomMaterial = z.infer<typeof customMaterialSchema>;
 
+/** The one default cell of the app, the command line and migrated documents. */
 export const DEFAULT_CELL: CellSettings = {
 	material: { preset: 'generic-reflective-tn' },
-	gap_um: 5,
-	twist_deg: 90,
-	pretilt_deg: 2,
-	gapToPitch: 0.1,
+	gap_um: CELL_FIELDS.gap_um.default,
+	twist_deg: CELL_FIELDS.twist_deg.default,
+	pretilt_deg: CELL_FIELDS.pretilt_deg.default,
+	gapToPitch: CELL_FIELDS.gapToPitch.default,
 	mode: 'positive',
 	polarizer: { kind: 'neutral-grey' },
 	reflector: { kind: 'brushed-metal' },
-	frontSurfaceReflectance: 0.04,
-	switchingLimit_s: 1
+	frontSurfaceReflectance: CELL_FIELDS.frontSurfaceReflectance.default,
+	switchingLimit_s: CELL_FIELDS.switchingLimit_s.default
 };
 
-export const DEFAULT_LIGHTING: Lighting = { illuminant: 'D65', observer: 2, illuminance_lx: 500 };
+export const DEFAULT_LIGHTING: Lighting = {
+	illuminant: 'D65',
+	observer: 2,
+	illuminance_lx: LIGHTING_FIELDS.illuminance_lx.default
+};

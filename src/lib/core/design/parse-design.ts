@@ -7,6 +7,7 @@ import { designSchema, type Design } from './schema';
 import { formatJsonPath, type DesignIssue } from './issues';
 import { migrateDocument, type MigrationTable } from './migrations';
 import { checkReferences } from './references';
+import { describeJsonError, formatJsonError } from './json-error';
 
 export type ParseResult = { ok: true; design: Design } | { ok: false; issues: DesignIssue[] };
 
@@ -35,8 +36,8 @@ export function parseDesignText(text: string): ParseResult {
 	try {
 		raw = JSON.parse(text);
 	} catch (error) {
-		const reason = error instanceof Error ? error.message : String(error);
-		return { ok: false, issues: [{ path: '(root)', message: `not valid JSON: ${reason}` }] };
+		const place = formatJsonError(describeJsonError(text, error));
+		return { ok: false, issues: [{ path: '(root)', message: `not valid JSON at ${place}` }] };
 	}
 	return parseDesignValue(raw);
 }

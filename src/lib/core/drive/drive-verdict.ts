@@ -102,7 +102,9 @@ export function windowFindings(options: {
 				message:
 					`Every segment switches cleanly from ${celsius(Math.min(...span))} to ` +
 					`${celsius(Math.max(...span))} at ${volts(amplitude_V)}; smallest margin ` +
-					`${volts(result.margin_V)} (${result.margin_percent.toFixed(1)} %)` +
+					`${volts(result.margin_V)} (${result.margin_percent.toFixed(1)} % of ` +
+					`${result.tightest?.limit === 'off' ? 'V10' : 'V90'}, ${result.tightest?.limit ?? 'on'} segments at ` +
+					`${celsius(result.tightest?.temperature_C ?? Math.min(...span))})` +
 					(tight ? ', which leaves little room for cell-gap and supply tolerances.' : '.'),
 				fix: tight
 					? 'Use fewer commons, a steeper fluid, or temperature compensation of the drive voltage.'

@@ -32,9 +32,14 @@ export interface OperatingWindow {
 	/** Amplitudes that work at every checked temperature; null when there are none. */
 	window: { min_V: number; max_V: number } | null;
 	best_V: number | null;
-	/** The smaller of the on and off margins at the set amplitude, in volts and percent. */
+	/**
+	 * The tightest margin at the set amplitude — the smallest relative margin over both limits and
+	 * every temperature — in volts and in percent of its threshold, both of the same limit.
+	 */
 	margin_V: number;
 	margin_percent: number;
+	/** Where the tightest margin lies; null when no temperature was checked. */
+	tightest: { temperature_C: number; limit: 'on' | 'off' } | null;
 	perTemperature: TemperatureCheck[];
 	ok: boolean;
 }
@@ -52,6 +57,21 @@ export function operatingWindow(options: {
 	let high_V = Infinity;
 	let margin_V = Infinity;
 	let margin_percent = Infinity;
+	let lowest_V = Infinity;
+	let tightest: OperatingWindow['tightest'] = null;
+	const consider = (
+		limit: 'on' | 'off',
+		temperature_C: number,
+		m_V: number,
+		threshold_V: number
+	) => {
+		const percent = threshold_V > 0 ? (100 * m_V) / threshold_V : m_V < 0 ? -Infinity : Infinity;
+		if (percent < margin_percent || tightest === null) {
+			margin_V = m_V;
+			margin_percent = percent;
+			tightest = { temperature_C, limit };
+		}
+	};
 	const perTemperature = thresholds.map((point): TemperatureCheck => {
 		const min_V = point.v90_V / unit.on_V;
 		const max_V = isStaticDrive(commons) ? Infinity : point.v10_V / unit.off_V;
@@ -59,12 +79,9 @@ export function operatingWindow(options: {
 		high_V = Math.min(high_V, max_V);
 		const onMargin_V = atSet.on_V - point.v90_V;
 		const offMargin_V = point.v10_V - atSet.off_V;
-		margin_V = Math.min(margin_V, onMargin_V, offMargin_V);
-		margin_percent = Math.min(
-			margin_percent,
-			(100 * onMargin_V) / point.v90_V,
-			(100 * offMargin_V) / point.v10_V
-		);
+		consider('on', point.temperature_C, onMargin_V, point.v90_V);
+		consider('off', point.temperature_C, offMargin_V, point.v10_V);
+		lowest_V = Math.min(lowest_V, onMargin_V, offMargin_V);
 		return {
 			...point,
 			on_V: atSet.on_V,
@@ -86,7 +103,8 @@ export function operatingWindow(options: {
 		best_V,
 		margin_V,
 		margin_percent,
+		tightest,
 		perTemperature,
-		ok: margin_V >= 0 && thresholds.length > 0
+		ok: lowest_V >= 0 && thresholds.length > 0
 	};
 }
