@@ -3,7 +3,8 @@
  * every failure to a one-line message on stderr and an exit code.
  */
 import { readFile } from 'node:fs/promises';
-import { CliError, EXIT } from './cli-error';
+import { CliError, EXIT, REPORT_TO } from './cli-error';
+import { escapeControls } from '../lib/core/text/escape-controls';
 import type { CliIo } from './io';
 import { runDrive } from './commands/drive';
 import { runCheck } from './commands/check';
@@ -23,6 +24,8 @@ Commands:
   check FILE   validate a design; check its wiring, drive and optics
   demo         write the demo design to stdout
 
+Exit status: 0 pass, 1 the design fails a check, 2 bad input, 3 internal error.
+
 Run "sunglyph <command> --help" for a command's options.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
@@ -37,16 +40,33 @@ const COMMANDS: Record<string, Command> = {
 const processIo: CliIo = {
 	out: (text) => process.stdout.write(text),
 	err: (text) => process.stderr.write(text),
-	readFile: (path) => readFile(path, 'utf8')
+	readFile: (path) => readFile(path, 'utf8'),
+	readBytes: (path) => readFile(path)
 };
 
-export async function main(argv: string[], io: CliIo = processIo): Promise<number> {
+/** Every line the CLI prints passes through here, so no input can drive the terminal. */
+function safeIo(io: CliIo): CliIo {
+	return {
+		...io,
+		out: (text) => io.out(escapeControls(text)),
+		err: (text) => io.err(escapeControls(text))
+	};
+}
+
+function isParseArgsError(error: unknown): boolean {
+	return (
+		error instanceof Error && 'code' in error && String(error.code).startsWith('ERR_PARSE_ARGS')
+	);
+}
+
+export async function main(argv: string[], rawIo: CliIo = processIo): Promise<number> {
+	const io = safeIo(rawIo);
 	const [name, ...rest] = argv;
 	if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
 		io.out(MAIN_HELP + '\n');
 		return name === undefined ? EXIT.badInput : EXIT.ok;
 	}
-	const command = COMMANDS[name];
+	const command = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;
 	if (!command) {
 		io.err(`sunglyph: unknown command "${name}" (commands: ${Object.keys(COMMANDS).join(', ')})\n`);
 		return EXIT.badInput;
@@ -58,14 +78,13 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 			io.err(`sunglyph ${name}: ${error.message}\n`);
 			return error.exitCode;
 		}
-		if (
-			error instanceof Error &&
-			'code' in error &&
-			String(error.code).startsWith('ERR_PARSE_ARGS')
-		) {
-			io.err(`sunglyph ${name}: ${error.message}\n`);
+		if (isParseArgsError(error)) {
+			io.err(`sunglyph ${name}: ${(error as Error).message}\n`);
 			return EXIT.badInput;
 		}
-		throw error;
+		const what = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+		const firstLine = what.split('\n')[0].slice(0, 300);
+		io.err(`sunglyph ${name}: internal error (${firstLine}); ${REPORT_TO}\n`);
+		return EXIT.internal;
 	}
 }

@@ -60,10 +60,10 @@ describe('sunglyph cell', () => {
 
 	it('names the parameter on bad input', async () => {
 		for (const [argv, pattern] of [
-			[['--gap-um', '-3'], /--gap-um: expected a number greater than 0/],
+			[['--gap-um', '-3'], /--gap-um: expected 0.5 to 100 µm/],
 			[['--twist', '300'], /--twist: expected a twist from 0 to 270/],
 			[['--material', 'unobtainium'], /--material: unknown preset "unobtainium"/],
-			[['--delta-n', 'NaN'], /--delta-n: "NaN" is not a number/],
+			[['--delta-n', 'NaN'], /--delta-n: "NaN" is not a decimal number/],
 			[['--illuminant', 'F7'], /--illuminant: Unknown illuminant "F7"/],
 			[['--polarizers', 'sideways'], /--polarizers: "sideways" is not one of crossed, parallel/],
 			[['--temperature-c', '120'], /isotropic at 120 °C/]

@@ -6,6 +6,7 @@
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
+import { plainCopy } from './plain-copy';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -58,7 +59,9 @@ export function migrateDocument(
 			message: `version ${from} is newer than this build understands (${target}); update sunglyph`
 		};
 	}
-	let current: RawDocument = JSON.parse(JSON.stringify(doc));
+	const copied = plainCopy(doc);
+	if (!copied.ok) return copied;
+	let current = copied.value as RawDocument;
 	for (let version = from; version < target; version++) {
 		const step = migrations[version];
 		if (!step) {
