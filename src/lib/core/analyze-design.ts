@@ -13,6 +13,7 @@ import {
 	type DriveReport,
 	type WiringReport
 } from './drive/analyze-drive';
+import { opticsTimeoutFinding } from './cell/optics-timeout';
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
 
@@ -32,7 +33,12 @@ export interface DesignReport {
 
 export function analyzeDesign(
 	design: Design,
-	options: { cell?: CellReport | null; cellError?: string | null } = {}
+	options: {
+		cell?: CellReport | null;
+		cellError?: string | null;
+		/** Set when the optical model was stopped at its time limit (seconds). */
+		cellTimeLimit_s?: number | null;
+	} = {}
 ): DesignReport {
 	const cell = options.cell ?? null;
 	const cellError = options.cellError ?? null;
@@ -45,6 +51,7 @@ export function analyzeDesign(
 	const cellFindings: Finding[] = cell ? [...cell.findings] : [];
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
+	if (options.cellTimeLimit_s) cellFindings.push(opticsTimeoutFinding(options.cellTimeLimit_s));
 	if (cellError)
 		cellFindings.push(
 			finding({
