@@ -8,6 +8,12 @@
  */
 import { parseDesignText, type ParseResult } from './parse-design';
 
+/** The decoder both Node and browsers provide (the core compiles without the DOM library). */
+declare const TextDecoder: new (
+	label: string,
+	options?: { fatal?: boolean; ignoreBOM?: boolean }
+) => { decode(bytes: Uint8Array): string };
+
 /** 50 MB: far above any real design (the demo is about 60 kB), far below a memory problem. */
 export const MAX_DESIGN_BYTES = 50 * 1024 * 1024;
 
