@@ -21,6 +21,7 @@ import {
 	getDesign,
 	listDesigns,
 	newDesignId,
+	parkDesign,
 	putDesign,
 	type StoredDesign
 } from './autosave-store';
@@ -102,7 +103,8 @@ export class AutosaveSession {
 			let pick: StoredDesign | null = own?.readable && (await this.#free(tabId!)) ? own : null;
 			if (!pick) {
 				for (const item of await listDesigns()) {
-					if (item.readable && item.record.unsaved && (await this.#free(item.record.id))) {
+					const candidate = item.record.unsaved && !item.record.parked;
+					if (item.readable && candidate && (await this.#free(item.record.id))) {
 						pick = item;
 						break;
 					}
@@ -162,7 +164,13 @@ export class AutosaveSession {
 
 	/** Opens another document under the given record id (a new undo history starts). */
 	#switchTo(options: { id: string; design: Design; fileName: string; unsaved: boolean }) {
-		void this.#saver.flush();
+		// The design put aside stays kept (and listed) but is no longer offered as recovery.
+		const leaving = this.designId;
+		if (this.armed && leaving !== options.id)
+			void this.#saver
+				.flush()
+				.then(() => parkDesign(leaving))
+				.catch(() => (this.failed = true));
 		this.#doc.replaceDocument(options.design, options.fileName);
 		this.#serial = this.#doc.documentSerial;
 		this.#lastDesign = this.#doc.design;

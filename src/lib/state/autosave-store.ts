@@ -22,6 +22,8 @@ export interface DesignRecord {
 	changedAt_ms: number;
 	/** True while the record holds changes not yet saved to a file. */
 	unsaved: boolean;
+	/** Put aside by the user (another design opened in its place): not offered as recovery. */
+	parked?: boolean;
 }
 
 export type StoredDesign =
@@ -55,7 +57,8 @@ function asRecord(value: unknown, key: string): DesignRecord | null {
 		fileName: typeof v.fileName === 'string' ? v.fileName : 'design.sunglyph.json',
 		text: v.text,
 		changedAt_ms: Number.isFinite(v.changedAt_ms) ? Number(v.changedAt_ms) : 0,
-		unsaved: v.unsaved === true
+		unsaved: v.unsaved === true,
+		parked: v.parked === true
 	};
 }
 
@@ -73,6 +76,16 @@ export async function putDesign(record: DesignRecord): Promise<void> {
 export async function getDesign(id: string): Promise<StoredDesign | null> {
 	const record = asRecord(await (await database()).get(DESIGNS, id), id);
 	return record ? withDesign(record) : null;
+}
+
+/** Marks a kept design as put aside by the user; it stays listed, and is not deleted. */
+export async function parkDesign(id: string): Promise<void> {
+	const d = await database();
+	const tx = d.transaction(DESIGNS, 'readwrite');
+	const value = await tx.store.get(id);
+	if (typeof value === 'object' && value !== null)
+		await tx.store.put({ ...value, parked: true }, id);
+	await tx.done;
 }
 
 /** Every kept design, most recently changed first; unreadable ones included, never dropped. */
