@@ -9,7 +9,11 @@ export class CliError extends Error {
 }
 
 /**
- * Exit codes: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input, 3 a fault
- * of the program itself (never a verdict on the design).
+ * Exit codes: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input,
+ * 3 an internal error of sunglyph itself (never a verdict on the design).
  */
 export const EXIT = { ok: 0, checkFailed: 1, badInput: 2, internal: 3 } as const;
+
+/** Where an internal error should be reported, printed after its one-line message. */
+export const REPORT_TO =
+	'please report it to the sunglyph maintainers with the command line and the input file';

@@ -4,7 +4,8 @@
  * loaded only when that command runs, so a quick drive calculation never loads the cell model.
  */
 import { readFile } from 'node:fs/promises';
-import { CliError, EXIT } from './cli-error';
+import { CliError, EXIT, REPORT_TO } from './cli-error';
+import { escapeControls } from '../lib/core/text/escape-controls';
 import type { CliIo } from './io';
 import { joinNegativeValues } from './parse-numbers';
 
@@ -24,6 +25,8 @@ Commands:
   view-angle FILE  contrast over viewing directions, best direction, parallax shadow
   report FILE      write the printable design report (HTML, or PDF with --pdf)
   demo             write the demo design to stdout
+
+Exit status: 0 pass, 1 the design fails a check, 2 bad input, 3 internal error.
 
 Run "sunglyph <command> --help" for a command's options.`;
 
@@ -45,10 +48,27 @@ const COMMANDS: Record<string, () => Promise<Command>> = {
 const processIo: CliIo = {
 	out: (text) => process.stdout.write(text),
 	err: (text) => process.stderr.write(text),
-	readFile: (path) => readFile(path, 'utf8')
+	readFile: (path) => readFile(path, 'utf8'),
+	readBytes: (path) => readFile(path)
 };
 
-export async function main(argv: string[], io: CliIo = processIo): Promise<number> {
+/** Every line the CLI prints passes through here, so no input can drive the terminal. */
+function safeIo(io: CliIo): CliIo {
+	return {
+		...io,
+		out: (text) => io.out(escapeControls(text)),
+		err: (text) => io.err(escapeControls(text))
+	};
+}
+
+function isParseArgsError(error: unknown): boolean {
+	return (
+		error instanceof Error && 'code' in error && String(error.code).startsWith('ERR_PARSE_ARGS')
+	);
+}
+
+export async function main(argv: string[], rawIo: CliIo = processIo): Promise<number> {
+	const io = safeIo(rawIo);
 	const [name, ...rest] = argv;
 	if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
 		io.out(MAIN_HELP + '\n');
@@ -67,18 +87,13 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
 			io.err(`sunglyph ${name}: ${error.message}\n`);
 			return error.exitCode;
 		}
-		if (
-			error instanceof Error &&
-			'code' in error &&
-			String(error.code).startsWith('ERR_PARSE_ARGS')
-		) {
-			io.err(`sunglyph ${name}: ${error.message}\n`);
+		if (isParseArgsError(error)) {
+			io.err(`sunglyph ${name}: ${(error as Error).message}\n`);
 			return EXIT.badInput;
 		}
-		const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
-		io.err(
-			`sunglyph ${name}: internal error — this is a fault in sunglyph, not in the input:\n${detail}\n`
-		);
+		const what = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+		const firstLine = what.split('\n')[0].slice(0, 300);
+		io.err(`sunglyph ${name}: internal error (${firstLine}); ${REPORT_TO}\n`);
 		return EXIT.internal;
 	}
 }

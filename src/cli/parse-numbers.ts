@@ -5,8 +5,27 @@ import { parseBiasText } from '../lib/core/drive/bias-text';
 export function parseNumber(option: string, text: string | undefined): number {
 	if (text === undefined || text.trim() === '')
 		throw new CliError(`--${option}: expected a number`);
+	if (!DECIMAL.test(text.trim()))
+		throw new CliError(`--${option}: "${text}" is not a decimal number (such as 12, -3.5 or 1e3)`);
 	const value = Number(text);
-	if (!Number.isFinite(value)) throw new CliError(`--${option}: "${text}" is not a number`);
+	if (!Number.isFinite(value)) throw new CliError(`--${option}: "${text}" is out of range`);
+	return value;
+}
+
+/** Decimal notation only: no hexadecimal, binary or octal prefixes, no "Infinity". */
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
+/** A decimal number within [min, max], with the range and unit named when it is outside. */
+export function parseNumberWithin(
+	option: string,
+	text: string | undefined,
+	range: { min: number; max: number; unit: string }
+): number {
+	const value = parseNumber(option, text);
+	if (value < range.min || value > range.max) {
+		const u = range.unit ? ` ${range.unit}` : '';
+		throw new CliError(`--${option}: ${value}${u} is outside ${range.min} to ${range.max}${u}`);
+	}
 	return value;
 }
 

@@ -70,7 +70,7 @@ describe('sunglyph cell', () => {
 			[['--d-over-p', '3'], /--d-over-p: expected a chiral dose d\/p from -2 to 2/],
 			[['--polarizer', 'custom'], /--polarizer custom needs --polarizer-k1 and --polarizer-k2/],
 			[['--material', 'unobtainium'], /--material: unknown preset "unobtainium"/],
-			[['--delta-n', 'NaN'], /--delta-n: "NaN" is not a number/],
+			[['--delta-n', 'NaN'], /--delta-n: "NaN" is not a decimal number/],
 			[['--illuminant', 'F7'], /--illuminant: Unknown illuminant "F7"/],
 			[['--polarizers', 'sideways'], /--polarizers: "sideways" is not one of crossed, parallel/],
 			[['--temperature-c', '120'], /isotropic at 120 °C/]

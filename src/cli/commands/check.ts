@@ -1,7 +1,7 @@
 /** `sunglyph check <design.json>`: validation, wiring and the drive verdict of a design file. */
 import { findingLines } from '../finding-text';
 import { parseArgs } from 'node:util';
-import { parseDesignText } from '../../lib/core/design/parse-design';
+import { readDesignBytes } from '../../lib/core/design/read-design-bytes';
 import { formatIssue } from '../../lib/core/design/issues';
 import { analyzeDesignWithCell } from '../../lib/core/analyze-design';
 import { opticsSummary, opticsLines } from '../optics-report';
@@ -23,7 +23,8 @@ Validates a design file and checks its wiring, its geometry against the design r
 (overlaps, gaps, widths, outlines, placement on the glass, character size) and its
 multiplexed drive over the operating temperature range.
 
-Exit status: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input.
+Exit status: 0 all checks pass, 1 a design check fails, 2 unreadable or invalid input,
+3 an internal error (please report it).
 
 ${helpRows([
 	{ flag: '--json', text: 'print the full report as JSON' },
@@ -44,13 +45,15 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 	if (positionals.length !== 1)
 		throw new CliError('expected exactly one design file (see sunglyph check --help)');
 	const path = positionals[0];
-	let text: string;
+	let bytes: Uint8Array;
 	try {
-		text = await io.readFile(path);
+		bytes = io.readBytes
+			? await io.readBytes(path)
+			: new TextEncoder().encode(await io.readFile(path));
 	} catch (error) {
 		throw new CliError(`cannot read ${path}: ${fileErrorText(error)}`);
 	}
-	const parsed = parseDesignText(text);
+	const parsed = readDesignBytes(bytes);
 	if (!parsed.ok) {
 		io.err(
 			`${path}: invalid design\n` +

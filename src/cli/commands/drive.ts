@@ -1,7 +1,8 @@
 /** `sunglyph drive`: RMS levels of a multiplexed drive, optionally against a cell's thresholds. */
 import { parseArgs } from 'node:util';
 import { analyzeDrive } from '../../lib/core/drive/analyze-drive';
-import { parseBias, parseInteger, parseNumber } from '../parse-numbers';
+import { parseBias, parseInteger, parseNumberWithin } from '../parse-numbers';
+import { BOUNDS } from '../../lib/core/design/bounds';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
@@ -58,20 +59,26 @@ export function runDrive(args: string[], io: CliIo): number {
 	const commons = parseInteger('commons', values.commons);
 	if (commons < 1 || commons > 256) throw new CliError(`--commons: ${commons} is outside 1–256`);
 	const biasDivisor = values.bias === undefined ? 3 : parseBias(values.bias);
-	const amplitude_V = parseNumber('volts', values.volts);
+	const amplitude_V = parseNumberWithin('volts', values.volts, BOUNDS.voltage_V);
 	if (amplitude_V <= 0) throw new CliError('--volts: expected a voltage above 0');
 	const hasCell = values.v10 !== undefined || values.v90 !== undefined;
 	if (hasCell && (values.v10 === undefined || values.v90 === undefined)) {
 		throw new CliError('--v10 and --v90 go together');
 	}
 	const reference_C =
-		values['reference-c'] === undefined ? 25 : parseNumber('reference-c', values['reference-c']);
-	const v10_V = hasCell ? parseNumber('v10', values.v10) : 1;
-	const v90_V = hasCell ? parseNumber('v90', values.v90) : 1.5;
+		values['reference-c'] === undefined
+			? 25
+			: parseNumberWithin('reference-c', values['reference-c'], BOUNDS.operating_C);
+	const v10_V = hasCell ? parseNumberWithin('v10', values.v10, BOUNDS.voltage_V) : 1;
+	const v90_V = hasCell ? parseNumberWithin('v90', values.v90, BOUNDS.voltage_V) : 1.5;
 	if (hasCell && !(v10_V > 0 && v90_V > v10_V))
 		throw new CliError('--v90 must exceed --v10, both above 0');
-	const min_C = values['min-c'] === undefined ? reference_C : parseNumber('min-c', values['min-c']);
-	const max_C = values['max-c'] === undefined ? reference_C : parseNumber('max-c', values['max-c']);
+	const temperature = (option: 'min-c' | 'max-c') =>
+		values[option] === undefined
+			? reference_C
+			: parseNumberWithin(option, values[option], BOUNDS.operating_C);
+	const min_C = temperature('min-c');
+	const max_C = temperature('max-c');
 	if (min_C > max_C) throw new CliError('--min-c must not exceed --max-c');
 	const report = analyzeDrive({
 		drive: {
@@ -88,7 +95,9 @@ export function runDrive(args: string[], io: CliIo): number {
 			v90_V,
 			reference_C,
 			tempCoeff_mV_per_K:
-				values['tc-mv-per-k'] === undefined ? 0 : parseNumber('tc-mv-per-k', values['tc-mv-per-k'])
+				values['tc-mv-per-k'] === undefined
+					? 0
+					: parseNumberWithin('tc-mv-per-k', values['tc-mv-per-k'], BOUNDS.tempCoeff_mV_per_K)
 		}
 	});
 	if (values.json) {

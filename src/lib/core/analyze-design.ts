@@ -13,6 +13,7 @@ import {
 	type DriveReport,
 	type WiringReport
 } from './drive/analyze-drive';
+import { opticsTimeoutFinding } from './cell/optics-timeout';
 import { finding, overallSeverity, type Finding, type Severity } from './findings/finding';
 import { analyzeCell, type CellReport } from './cell/analyze-cell';
 import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
@@ -42,7 +43,12 @@ export interface DesignReport {
 
 export function analyzeDesign(
 	design: Design,
-	options: { cell?: CellReport | null; cellError?: string | null } = {}
+	options: {
+		cell?: CellReport | null;
+		cellError?: string | null;
+		/** Set when the optical model was stopped at its time limit (seconds). */
+		cellTimeLimit_s?: number | null;
+	} = {}
 ): DesignReport {
 	const cell = options.cell ?? null;
 	const cellError = options.cellError ?? null;
@@ -58,6 +64,7 @@ export function analyzeDesign(
 	if (cell && design.thresholds.source === 'manual')
 		cellFindings.push(...thresholdAgreement(design, cell));
 	cellFindings.push(...orientationFindings(design));
+	if (options.cellTimeLimit_s) cellFindings.push(opticsTimeoutFinding(options.cellTimeLimit_s));
 	if (cellError)
 		cellFindings.push(
 			finding({

@@ -14,6 +14,7 @@ import { createCellOptics } from './cell-optics';
 import { electroOpticCurve, type ElectroOpticCurve } from './electro-optic-curve';
 import { contrastRatio, pixelAppearance, type PixelAppearance } from './pixel-appearance';
 import { geometryOfCell, materialOfCell } from './resolve-cell';
+import { responseTemperatures } from './response-temperatures';
 
 export const ROOM_C = 25;
 
@@ -189,11 +190,4 @@ function contrastFindings(ratio: number, ghost: number): Finding[] {
 		);
 	}
 	return findings;
-}
-
-function responseTemperatures(min_C: number, max_C: number): number[] {
-	const list = [min_C];
-	for (let t = Math.ceil(min_C / 10) * 10; t < max_C; t += 10) if (t > min_C) list.push(t);
-	if (max_C > min_C) list.push(max_C);
-	return list;
 }

@@ -5,6 +5,7 @@
  * per instance), added on top of the draw order row by row.
  */
 import type { Design } from '../design/schema';
+import { LIMITS } from '../design/bounds';
 import { translation } from '../geometry/affine';
 import { requireThat } from './command-error';
 import { copyRecords } from './copy-records';
@@ -13,12 +14,25 @@ import { IdAllocator } from './ids';
 import type { Patch } from './patch';
 import { selectedElectrodes } from './selection';
 
+/** Most electrodes one array may add: a full-glass dot matrix, far beyond a segment display. */
+export const MAX_ARRAY_NEW_ELECTRODES = 2_000;
+
 function arrayOf(
 	design: Design,
 	ids: readonly string[],
 	offsets: readonly [number, number][]
 ): Patch {
 	const electrodes = selectedElectrodes(design, ids);
+	const added = electrodes.length * offsets.length;
+	requireThat(
+		added <= MAX_ARRAY_NEW_ELECTRODES,
+		`the array would add ${added} electrodes; at most ${MAX_ARRAY_NEW_ELECTRODES} at once`
+	);
+	requireThat(
+		design.electrodes.length + added <= LIMITS.electrodes,
+		`the array would bring the design to ${design.electrodes.length + added} electrodes; ` +
+			`a design holds at most ${LIMITS.electrodes}`
+	);
 	const allocators = {
 		electrodes: IdAllocator.forCollection(design, 'electrodes'),
 		groups: IdAllocator.forCollection(design, 'groups')
@@ -62,6 +76,10 @@ export function gridArray(
 	requireThat(
 		ok(args.rows) && ok(args.cols) && args.rows * args.cols >= 2,
 		'expected whole rows and columns, 2 or more instances'
+	);
+	requireThat(
+		args.rows * args.cols - 1 <= MAX_ARRAY_NEW_ELECTRODES,
+		`${args.rows} × ${args.cols} instances is more than an array may make (${MAX_ARRAY_NEW_ELECTRODES + 1})`
 	);
 	requireThat(
 		Number.isFinite(args.pitchX_mm) && Number.isFinite(args.pitchY_mm),

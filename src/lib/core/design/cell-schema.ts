@@ -8,31 +8,37 @@
 import { z } from 'zod';
 import { CELL_FIELDS, LIGHTING_FIELDS } from './cell-fields';
 import { quantitySchema } from './quantity-schema';
+import { bounded, boundedAbove } from './bounds';
+import { illuminantProblem } from './illuminant-name';
+import { LC_PRESETS, presetById } from '../lc/presets';
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
-const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
 const fraction = () => finite().refine((v) => v >= 0 && v <= 1, 'expected a fraction from 0 to 1');
 
-const cauchySchema = z.strictObject({ a: positive(), b_um2: finite(), c_um4: finite() });
+const cauchySchema = z.strictObject({
+	a: bounded('cauchyA'),
+	b_um2: bounded('cauchyB_um2'),
+	c_um4: bounded('cauchyC_um4')
+});
 
 /** A user-defined nematic fluid; every field as in the material model (lc/material.ts). */
 export const customMaterialSchema = z
 	.strictObject({
-		id: z.string().min(1),
+		id: z.string().min(1).max(64),
 		label: z.string().max(200),
 		source: z.string().max(2000),
-		reference_C: finite(),
-		clearing_C: finite(),
-		orderExponent: positive(),
+		reference_C: bounded('operating_C'),
+		clearing_C: bounded('clearing_C'),
+		orderExponent: boundedAbove('orderExponent'),
 		extraordinary: cauchySchema,
 		ordinary: cauchySchema,
-		k11_pN: positive(),
-		k22_pN: positive(),
-		k33_pN: positive(),
-		epsParallel: positive(),
-		epsPerpendicular: positive(),
-		gamma1_Pas: positive(),
-		activation_eV: finite().refine((v) => v >= 0, 'expected 0 eV or more'),
+		k11_pN: bounded('elastic_pN'),
+		k22_pN: bounded('elastic_pN'),
+		k33_pN: bounded('elastic_pN'),
+		epsParallel: bounded('permittivity'),
+		epsPerpendicular: bounded('permittivity'),
+		gamma1_Pas: boundedAbove('viscosity_Pas'),
+		activation_eV: bounded('activation_eV'),
 		viscosityLaw: z.enum(['order-arrhenius', 'arrhenius'])
 	})
 	.refine((m) => m.clearing_C > m.reference_C, 'expected clearing_C above reference_C')
@@ -42,7 +48,16 @@ export const customMaterialSchema = z
 	);
 
 export const materialChoiceSchema = z.union([
-	z.strictObject({ preset: z.string().min(1) }),
+	z.strictObject({
+		preset: z
+			.string()
+			.min(1)
+			.max(64)
+			.refine(
+				(id) => presetById(id) !== undefined,
+				`expected a known fluid preset (${LC_PRESETS.map((m) => m.id).join(', ')})`
+			)
+	}),
 	z.strictObject({ custom: customMaterialSchema })
 ]);
 
@@ -79,7 +94,14 @@ export const cellSchema = z.strictObject({
 
 export const lightingSchema = z.strictObject({
 	/** 'A', 'D50', 'D65', 'D<cct>' such as 'D75', 'F2', 'F11' or 'E'. */
-	illuminant: z.string().min(1),
+	illuminant: z
+		.string()
+		.min(1)
+		.max(16)
+		.superRefine((name, ctx) => {
+			const problem = illuminantProblem(name);
+			if (problem) ctx.addIssue({ code: 'custom', message: problem });
+		}),
 	observer: z.union([z.literal(2), z.literal(10)]),
 	illuminance_lx: quantitySchema(LIGHTING_FIELDS.illuminance_lx)
 });

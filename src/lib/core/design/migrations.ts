@@ -8,6 +8,7 @@ import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
 import { addLegibilitySection } from './legibility-schema';
 import { addOrientation } from './orientation-migration';
+import { plainCopy } from './plain-copy';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -64,7 +65,9 @@ export function migrateDocument(
 			message: `version ${from} is newer than this build understands (${target}); update sunglyph`
 		};
 	}
-	let current: RawDocument = JSON.parse(JSON.stringify(doc));
+	const copied = plainCopy(doc);
+	if (!copied.ok) return copied;
+	let current = copied.value as RawDocument;
 	for (let version = from; version < target; version++) {
 		const step = migrations[version];
 		if (!step) {

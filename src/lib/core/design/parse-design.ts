@@ -34,7 +34,8 @@ export function parseDesignValue(
 export function parseDesignText(text: string): ParseResult {
 	let raw: unknown;
 	try {
-		raw = JSON.parse(text);
+		// A byte-order mark left by an editor is not part of the JSON.
+		raw = JSON.parse(text.startsWith('\uFEFF') ? text.slice(1) : text);
 	} catch (error) {
 		const place = formatJsonError(describeJsonError(text, error));
 		return { ok: false, issues: [{ path: '(root)', message: `not valid JSON at ${place}` }] };

@@ -16,12 +16,12 @@ import { pinoutSchema, rulesSchema } from './rules-schema';
 import { legibilitySchema } from './legibility-schema';
 import { orientationSchema } from './orientation-schema';
 import { loadSettingsSchema } from '../load/load-settings';
+import { bounded, boundedAbove, LIMITS } from './bounds';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
 export const DESIGN_VERSION = 5;
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
-const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
 const id = () =>
 	z
 		.string()
@@ -30,27 +30,31 @@ const id = () =>
 		.regex(/^[A-Za-z0-9_.:-]+$/, 'expected an id of letters, digits and _ . : -');
 const label = () => z.string().max(200, 'expected at most 200 characters');
 
-const handle = z.tuple([finite(), finite()]);
+const coordinate = () => bounded('coordinate_mm');
+const handle = z.tuple([coordinate(), coordinate()]);
 
 export const pointSchema = z.strictObject({
-	x: finite(),
-	y: finite(),
+	x: coordinate(),
+	y: coordinate(),
 	in: handle.optional(),
 	out: handle.optional()
 });
 
-export const contourSchema = z.array(pointSchema).min(3, 'expected at least 3 points');
+export const contourSchema = z
+	.array(pointSchema)
+	.min(3, 'expected at least 3 points')
+	.max(LIMITS.pointsPerContour, `expected at most ${LIMITS.pointsPerContour} points`);
 
 export const rectSchema = z.strictObject({
-	x_mm: finite(),
-	y_mm: finite(),
-	width_mm: positive(),
-	height_mm: positive()
+	x_mm: coordinate(),
+	y_mm: coordinate(),
+	width_mm: boundedAbove('coordinate_mm'),
+	height_mm: boundedAbove('coordinate_mm')
 });
 
 export const glassSchema = z.strictObject({
-	width_mm: positive(),
-	height_mm: positive(),
+	width_mm: bounded('glassSize_mm'),
+	height_mm: bounded('glassSize_mm'),
 	viewingArea: rectSchema
 });
 
@@ -63,7 +67,10 @@ export const electrodeSchema = z.strictObject({
 	name: label(),
 	kind: electrodeKindSchema,
 	outline: contourSchema,
-	holes: z.array(contourSchema).default([]),
+	holes: z
+		.array(contourSchema)
+		.max(LIMITS.holesPerElectrode, `expected at most ${LIMITS.holesPerElectrode} holes`)
+		.default([]),
 	/** Id of the common (back plate) this electrode faces, or null while unassigned. */
 	common: id().nullable(),
 	/** Id of the segment line (front plate pin) driving it, or null while unassigned. */
@@ -77,10 +84,20 @@ export const generatorParamSchema = z.union([finite(), z.string().max(200), z.bo
 export const groupSchema = z.strictObject({
 	id: id(),
 	name: label(),
-	members: z.array(id()),
+	members: z
+		.array(id())
+		.max(LIMITS.groupMembers, `expected at most ${LIMITS.groupMembers} members`),
 	/** Parameters a generator used, so the group can be regenerated after the fact. */
 	generator: z
-		.strictObject({ kind: z.string().min(1), params: z.record(z.string(), generatorParamSchema) })
+		.strictObject({
+			kind: z.string().min(1).max(64),
+			params: z
+				.record(z.string().max(64), generatorParamSchema)
+				.refine(
+					(p) => Object.keys(p).length <= LIMITS.generatorParams,
+					`expected at most ${LIMITS.generatorParams} parameters`
+				)
+		})
 		.optional()
 });
 
@@ -90,12 +107,12 @@ export const driveSchema = z.strictObject({
 	/** Number of commons N (duty 1/N); 1 is static drive. */
 	commons: z.number().int('expected a whole number of commons').min(1).max(256),
 	/** The bias divisor a in "bias 1/a"; ignored for static drive. */
-	biasDivisor: finite().refine((v) => v >= 2, 'expected a bias divisor of at least 2 (bias 1/2)'),
-	amplitude_V: positive(),
-	frameRate_Hz: positive(),
+	biasDivisor: bounded('biasDivisor'),
+	amplitude_V: boundedAbove('voltage_V'),
+	frameRate_Hz: bounded('frameRate_Hz'),
 	inversion: inversionSchema,
 	temperature: z
-		.strictObject({ min_C: finite(), max_C: finite() })
+		.strictObject({ min_C: bounded('operating_C'), max_C: bounded('operating_C') })
 		.refine((t) => t.min_C <= t.max_C, 'expected min_C not above max_C')
 });
 
@@ -103,25 +120,32 @@ export const thresholdSchema = z
 	.strictObject({
 		/** 'manual' uses the figures below; 'computed' lets the cell model supply them. */
 		source: z.enum(['manual', 'computed']),
-		v10_V: positive(),
-		v90_V: positive(),
-		reference_C: finite(),
+		v10_V: boundedAbove('voltage_V'),
+		v90_V: boundedAbove('voltage_V'),
+		reference_C: bounded('operating_C'),
 		/** Change of V10 and V90 per kelvin, in mV/K (negative for ordinary TN fluids). */
-		tempCoeff_mV_per_K: finite()
+		tempCoeff_mV_per_K: bounded('tempCoeff_mV_per_K')
 	})
 	.refine((t) => t.v90_V > t.v10_V, 'expected v90_V above v10_V');
 
-export const viewingSchema = z.strictObject({ distance_mm: positive() });
+export const viewingSchema = z.strictObject({ distance_mm: bounded('viewingDistance_mm') });
 
 export const designSchema = z.strictObject({
 	format: z.literal(DESIGN_FORMAT),
 	version: z.literal(DESIGN_VERSION),
 	name: label(),
 	glass: glassSchema,
-	commons: z.array(lineRefSchema),
-	segmentLines: z.array(lineRefSchema),
-	electrodes: z.array(electrodeSchema),
-	groups: z.array(groupSchema).default([]),
+	commons: z.array(lineRefSchema).max(LIMITS.lines, `expected at most ${LIMITS.lines} commons`),
+	segmentLines: z
+		.array(lineRefSchema)
+		.max(LIMITS.lines, `expected at most ${LIMITS.lines} segment lines`),
+	electrodes: z
+		.array(electrodeSchema)
+		.max(LIMITS.electrodes, `expected at most ${LIMITS.electrodes} electrodes`),
+	groups: z
+		.array(groupSchema)
+		.max(LIMITS.groups, `expected at most ${LIMITS.groups} groups`)
+		.default([]),
 	drive: driveSchema,
 	thresholds: thresholdSchema,
 	viewing: viewingSchema,

@@ -8,6 +8,7 @@ import { RULE_CODES } from './codes-rules';
 import { LEGIBILITY_CODES } from './codes-legibility';
 import { VIEW_ANGLE_CODES } from './codes-viewangle';
 import { LOAD_CODES } from './codes-load';
+import { RELIABILITY_CODES } from './codes-reliability';
 
 export interface FindingCode {
 	code: string;
@@ -22,6 +23,7 @@ export const FINDING_CODES: readonly FindingCode[] = [
 	...VIEW_ANGLE_CODES,
 ];
 export const FINDING_CODES: readonly FindingCode[] = [...DRIVE_AND_OPTICS_CODES, ...LOAD_CODES];
+	...RELIABILITY_CODES
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));
 

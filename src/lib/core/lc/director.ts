@@ -71,7 +71,8 @@ export function continuationLadder(cell: DirectorCell, voltage_V: number): numbe
 	const scale_V = twisted > 0 ? twisted : splayThreshold_V(cell.material);
 	const ladder = [0];
 	let factor = 0.9;
-	while (factor * scale_V < voltage_V) {
+	// The factor grows geometrically, so 200 rungs reach any finite voltage over a positive scale.
+	while (factor * scale_V < voltage_V && scale_V > 0 && ladder.length < 200) {
 		ladder.push(factor * scale_V);
 		factor = factor < 1.15 ? factor + 0.1 : factor * 1.25;
 	}
