@@ -13,6 +13,7 @@ import { generateBarGraph } from '../src/lib/core/glyphs/bar-graph';
 import { serializeDesign } from '../src/lib/core/design/parse-design';
 import { DEFAULT_CELL } from '../src/lib/core/design/cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../src/lib/core/design/rules-schema';
+import { DEFAULT_GLASS_ART } from '../src/lib/core/design/glass-art-schema';
 
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 const pt = (x: number, y: number, inH?: [number, number], outH?: [number, number]): Point => ({
@@ -267,7 +268,8 @@ const design: Design = {
 	cell: DEFAULT_CELL,
 	lighting: { illuminant: 'D65', observer: 2, illuminance_lx: 500 },
 	rules: DEFAULT_RULES,
-	pinout: DEFAULT_PINOUT
+	pinout: DEFAULT_PINOUT,
+	glassArt: DEFAULT_GLASS_ART
 };
 
 const target = new URL('../src/lib/core/design/demo-design.json', import.meta.url);

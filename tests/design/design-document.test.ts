@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { DEFAULT_GLASS_ART } from '../../src/lib/core/design/glass-art-schema';
 import { describe, expect, it } from 'vitest';
 import {
 	parseDesignText,
@@ -59,7 +60,7 @@ const designArb: fc.Arbitrary<Design> = fc
 		}));
 		return {
 			format: 'sunglyph-design',
-			version: 3,
+			version: 6,
 			name: 'random',
 			glass: {
 				width_mm: 50,
@@ -89,7 +90,8 @@ const designArb: fc.Arbitrary<Design> = fc
 			cell: { ...DEFAULT_CELL, gap_um: 3 + (commons % 5) },
 			lighting: DEFAULT_LIGHTING,
 			rules: { ...DEFAULT_RULES, minGap_mm: 0.01 * (1 + (lines % 5)) },
-			pinout: { ...DEFAULT_PINOUT, order: commons % 2 ? 'commons-last' : 'commons-first' }
+			pinout: { ...DEFAULT_PINOUT, order: commons % 2 ? 'commons-last' : 'commons-first' },
+			glassArt: DEFAULT_GLASS_ART
 		} satisfies Design;
 	});
 

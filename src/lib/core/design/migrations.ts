@@ -6,6 +6,7 @@
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema';
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from './cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
+import { addGlassArt } from './glass-art-schema';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -28,7 +29,13 @@ export const DESIGN_MIGRATIONS: MigrationTable = {
 					typeof e === 'object' && e !== null && !Array.isArray(e) ? { locked: false, ...e } : e
 				)
 			: doc.electrodes
-	})
+	}),
+	// pass-through here; the real step lands with its own section
+	3: (doc) => ({ ...doc }),
+	// pass-through here; the real step lands with its own section
+	4: (doc) => ({ ...doc }),
+	/** Version 6 adds the glass drawing: seal, ledge, overlap margin, transfer points, traces. */
+	5: addGlassArt
 };
 
 export type MigrationResult =

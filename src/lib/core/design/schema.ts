@@ -1,5 +1,5 @@
 /**
- * The sunglyph design document, version 3: the schema is the single source of truth and the
+ * The sunglyph design document, version 6: the schema is the single source of truth and the
  * TypeScript types are derived from it.
  *
  * Units: all lengths in millimetres (suffix `_mm`), voltages in volts (`_V`), frequencies in hertz
@@ -13,9 +13,10 @@
 import { z } from 'zod';
 import { cellSchema, lightingSchema } from './cell-schema';
 import { pinoutSchema, rulesSchema } from './rules-schema';
+import { glassArtSchema } from './glass-art-schema';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
-export const DESIGN_VERSION = 3;
+export const DESIGN_VERSION = 6;
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const positive = () => finite().refine((v) => v > 0, 'expected a number greater than 0');
@@ -125,7 +126,8 @@ export const designSchema = z.strictObject({
 	cell: cellSchema,
 	lighting: lightingSchema,
 	rules: rulesSchema,
-	pinout: pinoutSchema
+	pinout: pinoutSchema,
+	glassArt: glassArtSchema
 });
 
 export type Point = z.infer<typeof pointSchema>;
