@@ -10,6 +10,7 @@ import { runCheck } from './commands/check';
 import { runDemo } from './commands/demo';
 import { runCell } from './commands/cell';
 import { runIlluminant } from './commands/illuminant';
+import { runExport } from './commands/export';
 import { joinNegativeValues } from './parse-numbers';
 
 export const MAIN_HELP = `sunglyph: design and check reflective segment LCD glass
@@ -22,6 +23,7 @@ Commands:
   illuminant   X, Y, Z and x, y of a CIE illuminant's white
   check FILE   validate a design; check its wiring, drive and optics
   demo         write the demo design to stdout
+  export FILE  write the glass artwork: SVG, DXF, Gerber per plate and the pin-map CSV
 
 Run "sunglyph <command> --help" for a command's options.`;
 
@@ -31,7 +33,8 @@ const COMMANDS: Record<string, Command> = {
 	cell: runCell,
 	illuminant: runIlluminant,
 	check: runCheck,
-	demo: runDemo
+	demo: runDemo,
+	export: runExport
 };
 
 const processIo: CliIo = {

@@ -113,8 +113,8 @@ export function buildArtwork(design: Design): GlassArtwork {
 					id: `plate-${p.electrode.id}`,
 					name: `back of ${p.electrode.name || p.electrode.id}`,
 					kind: 'plate',
-					rings: [p.ring],
-					evenOdd: false,
+					rings: p.grown,
+					evenOdd: true,
 					electrodes: [p.electrode.id]
 				})),
 			...tracesOf('common', c.id),

@@ -5,8 +5,8 @@
  * minimum gap, the margin of both is cut to (distance − gap) / 2 and the pair is reported; where
  * even that leaves nothing (distance below the gap), the two commons' plates would touch.
  *
- * Holes are not carried to the back plate: facing no front ITO, a back plate under a hole stays
- * dark. Curves are flattened to 5 µm.
+ * An electrode's holes stay holes in its piece, shrunk by the margin (another common's electrode may
+ * sit inside one). Curves are flattened to 5 µm.
  */
 import type { Design, Electrode } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
@@ -19,9 +19,10 @@ export const PLATE_FLATTEN_um = 5;
 export interface PlatePiece {
 	electrode: Electrode;
 	common: string;
-	/** The electrode's flattened outline. */
-	outline: Float64Array;
-	ring: Float64Array;
+	/** The electrode's flattened outline and holes. */
+	rings: Float64Array[];
+	/** The grown outline, then the shrunk holes (even-odd). */
+	grown: Float64Array[];
 	margin_mm: number;
 }
 
@@ -37,9 +38,9 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 	const gap = design.rules.minGap_mm;
 	const assigned = design.electrodes.filter((e) => e.common !== null);
 	const outlines = assigned.map((e) =>
-		flattenContour(e.outline, { tolerance_um: PLATE_FLATTEN_um })
+		[e.outline, ...e.holes].map((c) => flattenContour(c, { tolerance_um: PLATE_FLATTEN_um }))
 	);
-	const bounds: Bounds[] = outlines.map((r) => ringBounds(r));
+	const bounds: Bounds[] = outlines.map((r) => ringBounds(r[0]));
 	const allowed = assigned.map(() => margin);
 	const conflicts: MarginConflict[] = [];
 	const reach = 2 * margin + gap;
@@ -52,7 +53,7 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 			if (bounds[j].minX > bounds[i].maxX + reach) break;
 			if (assigned[i].common === assigned[j].common) continue;
 			if (!boundsOverlap(bounds[i], bounds[j], reach)) continue;
-			const d = minimumGapBetweenRings([outlines[i]], [outlines[j]]);
+			const d = minimumGapBetweenRings(outlines[i], outlines[j]);
 			if (d >= reach) continue;
 			const cut = Math.max(0, (d - gap) / 2);
 			allowed[i] = Math.min(allowed[i], cut);
@@ -67,8 +68,8 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 	const pieces = assigned.map((electrode, i) => ({
 		electrode,
 		common: electrode.common as string,
-		outline: outlines[i],
-		ring: offsetRing(outlines[i], allowed[i]),
+		rings: outlines[i],
+		grown: outlines[i].map((r, k) => offsetRing(r, k === 0 ? allowed[i] : -allowed[i])),
 		margin_mm: allowed[i]
 	}));
 	return { pieces, conflicts };

@@ -85,14 +85,14 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 		);
 	const back: Item[] = art.common.flatMap((n) =>
 		n.conductors.flatMap((c) =>
-			c.rings.map((ring) => ({
+			(c.evenOdd ? [c.rings[0]] : c.rings).map((ring) => ({
 				bounds: ringBounds(ring),
 				ring,
 				net: n.id,
 				netName: n.name,
 				conductor: c.id,
 				convex: c.kind !== 'plate',
-				holes: [],
+				holes: c.evenOdd ? c.rings.slice(1) : [],
 				electrodes: c.electrodes
 			}))
 		)
@@ -107,6 +107,7 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 		const poly = f.convex ? clipToConvex(b.ring, f.ring) : clipToConvex(f.ring, b.ring);
 		let area = polygonArea(poly);
 		for (const hole of f.holes) area -= polygonArea(clipToConvex(hole, b.ring));
+		for (const hole of b.holes) area -= polygonArea(clipToConvex(hole, f.ring));
 		if (area < 1e-6) return;
 		const centre = polygonCentroid(poly);
 		const own = crossing.get(`${b.net}\u0000${f.net}`);

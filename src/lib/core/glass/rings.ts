@@ -87,7 +87,7 @@ function offsetWithSign(ring: Float64Array, offset_mm: number, sign: number): Fl
 	return Float64Array.from(out);
 }
 
-/** The ring moved outwards by `offset_mm` (whatever its winding). */
+/** The ring moved outwards by `offset_mm` (inwards when negative), whatever its winding. */
 export function offsetRing(ring: Float64Array, offset_mm: number): Float64Array {
 	if (offset_mm === 0) return ring;
 	const sign = signedArea(ring) > 0 ? 1 : -1;

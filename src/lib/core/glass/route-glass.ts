@@ -52,7 +52,7 @@ function routeCommonPlate(options: { design: Design; layout: GlassLayout; pieces
 	const search = new GridSearch(grid);
 	const commons = design.commons.map((c) => c.id);
 	const dots = new Map(transferPoints(design, layout).map((t) => [t.common, dotRing(t)]));
-	pieces.forEach((p) => grid.claim(p.ring, commons.indexOf(p.common), clearance));
+	pieces.forEach((p) => grid.claim(p.grown[0], commons.indexOf(p.common), clearance));
 	for (const [common, ring] of dots) grid.claim(ring, commons.indexOf(common), clearance);
 	grid.addCost(rectRing(design.glass.viewingArea), VIEW_COST);
 	const traces: Trace[] = [];
@@ -63,7 +63,7 @@ function routeCommonPlate(options: { design: Design; layout: GlassLayout; pieces
 		if (mine.length === 0 || !dot) return;
 		const terminals: Terminal[] = [
 			{ electrodes: [], ring: dot },
-			...mine.map((p) => ({ electrodes: [p.electrode.id], ring: p.ring }))
+			...mine.map((p) => ({ electrodes: [p.electrode.id], ring: p.grown[0] }))
 		];
 		const route = routeNet({
 			grid,
@@ -172,7 +172,7 @@ export function routeGlass(design: Design): GlassRouting {
 	const common = routeCommonPlate({ design, layout, pieces });
 	const dots = transferPoints(design, layout).map(dotRing);
 	const commonConductors = [
-		...pieces.map((p) => p.ring),
+		...pieces.map((p) => p.grown[0]),
 		...common.traces.flatMap(traceRings),
 		...dots
 	];

@@ -1,0 +1,10 @@
+import { demoDesign } from '../src/lib/core/design/demo';
+import { routeGlass } from '../src/lib/core/glass/route-glass';
+import { checkGlass } from '../src/lib/core/glass/check-glass';
+const d0 = demoDesign();
+const r = routeGlass(d0);
+const d = { ...d0, glassArt: { ...d0.glassArt, traces: r.traces } };
+const t = performance.now();
+const rep = checkGlass(d);
+console.log('check ms', performance.now() - t);
+for (const f of rep.findings) console.log(f.severity, f.code, f.message.slice(0, 150));
