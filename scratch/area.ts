@@ -1,0 +1,11 @@
+import { demoDesign } from '../src/lib/core/design/demo';
+import { planGlass } from '../src/lib/core/glass/plan-glass';
+import { buildArtwork } from '../src/lib/core/glass/artwork';
+import { plateArea_mm2 } from '../src/lib/core/glass/plate-area';
+const d0 = demoDesign();
+const d = { ...d0, glassArt: planGlass(d0).glassArt };
+const art = buildArtwork(d);
+let t = performance.now();
+console.log(plateArea_mm2(art.segment), performance.now() - t);
+t = performance.now();
+console.log(plateArea_mm2(art.common), performance.now() - t);
