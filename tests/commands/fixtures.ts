@@ -4,6 +4,7 @@
  */
 import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../../src/lib/core/design/rules-schema';
+import { DEFAULT_GLASS_ART } from '../../src/lib/core/design/glass-art-schema';
 import {
 	DESIGN_FORMAT,
 	DESIGN_VERSION,
@@ -67,7 +68,8 @@ export function emptyDesign(): Design {
 		cell: structuredClone(DEFAULT_CELL),
 		lighting: { ...DEFAULT_LIGHTING },
 		rules: { ...DEFAULT_RULES },
-		pinout: { ...DEFAULT_PINOUT }
+		pinout: { ...DEFAULT_PINOUT },
+		glassArt: structuredClone(DEFAULT_GLASS_ART)
 	};
 }
 
