@@ -1,0 +1,12 @@
+import { writeFileSync } from 'node:fs';
+import { Resvg } from '@resvg/resvg-js';
+import { demoDesign } from '../src/lib/core/design/demo';
+import { planGlass } from '../src/lib/core/glass/plan-glass';
+import { glassExportFiles } from '../src/lib/core/export/glass-export';
+const d0 = demoDesign();
+const t = performance.now();
+const plan = planGlass(d0);
+console.log('plan ms', performance.now() - t, plan.findings.map((f) => f.message).join('\n'));
+const d = { ...d0, glassArt: plan.glassArt };
+const svg = glassExportFiles(d, ['svg']).find((f) => f.name.endsWith('composite.svg'))!.content;
+writeFileSync('/tmp/glass-comp.png', new Resvg(svg, { fitTo: { mode: 'width', value: 1600 }, background: 'white' }).render().asPng());
