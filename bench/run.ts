@@ -216,6 +216,26 @@ rows.push(
 	)
 );
 
+{
+	// Glass drawing of 500 electrodes: back plates, traces of both plates, ghost check.
+	const { benchGlassDesign } = await import('./glass-design');
+	const { platePieces } = await import('../src/lib/core/glass/back-plate-pieces');
+	const { planGlass } = await import('../src/lib/core/glass/plan-glass');
+	const { buildArtwork } = await import('../src/lib/core/glass/artwork');
+	const { ghostCheck } = await import('../src/lib/core/glass/ghost-check');
+	const glass = benchGlassDesign(500);
+	const planned = { ...glass, glassArt: planGlass(glass).glassArt };
+	rows.push(measure('glass: back plates of 500 electrodes', 300, 5, () => void platePieces(glass)));
+	rows.push(
+		measure('glass: route both plates, 500 electrodes', 300, 3, () => void planGlass(glass))
+	);
+	rows.push(
+		measure('glass: artwork + ghost check, 500 electrodes', 300, 5, () => {
+			ghostCheck(planned, buildArtwork(planned));
+		})
+	);
+}
+
 const pad = (text: string, width: number) => text.padEnd(width);
 console.log(`Node ${process.version}, ${new Date().toISOString()}`);
 console.log(

@@ -15,6 +15,8 @@ import { DEFAULT_CELL } from '../src/lib/core/design/cell-schema';
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../src/lib/core/design/rules-schema';
 import { defaultLegibility } from '../src/lib/core/design/legibility-schema';
 import { DEFAULT_ORIENTATION } from '../src/lib/core/design/orientation-schema';
+import { DEFAULT_GLASS_ART } from '../src/lib/core/design/glass-art-schema';
+import { planGlass } from '../src/lib/core/glass/plan-glass';
 
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 const pt = (x: number, y: number, inH?: [number, number], outH?: [number, number]): Point => ({
@@ -274,9 +276,13 @@ const design: Design = {
 		...defaultLegibility({ distance_mm: 600, transflective: false }),
 		reading: { text: '12:34', bars: 6, icons: ['batFrame', 'bat1', 'bat2', 'drop', 'clock'] }
 	},
-	orientation: DEFAULT_ORIENTATION
+	orientation: DEFAULT_ORIENTATION,
+	glassArt: DEFAULT_GLASS_ART
 };
 
+// The glass drawing (transfer points and traces) is generated for the drawing above.
+const withGlass: Design = { ...design, glassArt: planGlass(design).glassArt };
+
 const target = new URL('../src/lib/core/design/demo-design.json', import.meta.url);
-writeFileSync(target, serializeDesign(design));
+writeFileSync(target, serializeDesign(withGlass));
 console.log(`wrote ${electrodes.length} electrodes on ${lines.length} lines to ${target.pathname}`);

@@ -23,6 +23,7 @@ Commands:
   load FILE        capacitance, drive current, battery life and ITO trace settling
   legibility FILE  light scenarios, contrast with glare, visual angle, threshold, verdicts
   view-angle FILE  contrast over viewing directions, best direction, parallax shadow
+  export FILE      write the glass artwork: SVG, DXF, Gerber per plate and the pin-map CSV
   report FILE      write the printable design report (HTML, or PDF with --pdf)
   demo             write the demo design to stdout
 
@@ -42,7 +43,8 @@ const COMMANDS: Record<string, () => Promise<Command>> = {
 	pins: async () => (await import('./commands/pins')).runPins,
 	legibility: async () => (await import('./commands/legibility')).runLegibility,
 	'view-angle': async () => (await import('./commands/view-angle')).runViewAngle,
-	load: async () => (await import('./commands/load')).runLoad
+	load: async () => (await import('./commands/load')).runLoad,
+	export: async () => (await import('./commands/export')).runExport
 };
 
 const processIo: CliIo = {

@@ -6,6 +6,7 @@ import { DEFAULT_CELL, DEFAULT_LIGHTING } from '../../src/lib/core/design/cell-s
 import { DEFAULT_PINOUT, DEFAULT_RULES } from '../../src/lib/core/design/rules-schema';
 import { defaultLegibility } from '../../src/lib/core/design/legibility-schema';
 import { DEFAULT_ORIENTATION } from '../../src/lib/core/design/orientation-schema';
+import { DEFAULT_GLASS_ART } from '../../src/lib/core/design/glass-art-schema';
 import {
 	DESIGN_FORMAT,
 	DESIGN_VERSION,
@@ -71,7 +72,8 @@ export function emptyDesign(): Design {
 		rules: { ...DEFAULT_RULES },
 		pinout: { ...DEFAULT_PINOUT },
 		legibility: defaultLegibility({ distance_mm: 500, transflective: false }),
-		orientation: { ...DEFAULT_ORIENTATION }
+		orientation: { ...DEFAULT_ORIENTATION },
+		glassArt: structuredClone(DEFAULT_GLASS_ART)
 	};
 }
 

@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { DEFAULT_GLASS_ART } from '../../src/lib/core/design/glass-art-schema';
 import { describe, expect, it } from 'vitest';
 import {
 	parseDesignText,
@@ -61,7 +62,7 @@ const designArb: fc.Arbitrary<Design> = fc
 		}));
 		return {
 			format: 'sunglyph-design',
-			version: 5,
+			version: 6,
 			name: 'random',
 			glass: {
 				width_mm: 50,
@@ -93,7 +94,8 @@ const designArb: fc.Arbitrary<Design> = fc
 			rules: { ...DEFAULT_RULES, minGap_mm: 0.01 * (1 + (lines % 5)) },
 			pinout: { ...DEFAULT_PINOUT, order: commons % 2 ? 'commons-last' : 'commons-first' },
 			legibility: defaultLegibility({ distance_mm: 500, transflective: commons % 2 === 0 }),
-			orientation: { ...DEFAULT_ORIENTATION, rearGlass_mm: [0.4, 0.55, 0.7, 1.1][commons % 4] }
+			orientation: { ...DEFAULT_ORIENTATION, rearGlass_mm: [0.4, 0.55, 0.7, 1.1][commons % 4] },
+			glassArt: DEFAULT_GLASS_ART
 		} satisfies Design;
 	});
 

@@ -63,9 +63,7 @@ export async function runViewAngle(args: string[], io: CliIo): Promise<number> {
 	const polarStep_deg =
 		values['polar-step'] === undefined ? 5 : parseNumber('polar-step', values['polar-step']);
 	const azimuthStep_deg =
-		values['azimuth-step'] === undefined
-			? 15
-			: parseNumber('azimuth-step', values['azimuth-step']);
+		values['azimuth-step'] === undefined ? 15 : parseNumber('azimuth-step', values['azimuth-step']);
 	if (!(polarStep_deg >= 0.5 && polarStep_deg <= 60))
 		throw new CliError(`--polar-step: expected 0.5 to 60 degrees, got ${polarStep_deg}`);
 	if (!(azimuthStep_deg >= 1 && azimuthStep_deg <= 180))

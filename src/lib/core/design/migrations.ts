@@ -9,6 +9,7 @@ import { DEFAULT_PINOUT, DEFAULT_RULES } from './rules-schema';
 import { addLegibilitySection } from './legibility-schema';
 import { addOrientation } from './orientation-migration';
 import { plainCopy } from './plain-copy';
+import { addGlassArt } from './glass-art-schema';
 
 export type RawDocument = Record<string, unknown>;
 /** migrations[n] lifts a version-n document to version n + 1. */
@@ -35,7 +36,9 @@ export const DESIGN_MIGRATIONS: MigrationTable = {
 	/** Version 4 adds the light scenarios, readers and reading preview (legibility). */
 	3: addLegibilitySection,
 	/** Version 5 adds the cell orientation: rubbing directions, twist sense, rear glass. */
-	4: addOrientation
+	4: addOrientation,
+	/** Version 6 adds the glass drawing: seal, ledge, overlap margin, transfer points, traces. */
+	5: addGlassArt
 };
 
 export type MigrationResult =

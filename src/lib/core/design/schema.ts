@@ -1,5 +1,5 @@
 /**
- * The sunglyph design document, version 5: the schema is the single source of truth and the
+ * The sunglyph design document, version 6: the schema is the single source of truth and the
  * TypeScript types are derived from it.
  *
  * Units: all lengths in millimetres (suffix `_mm`), voltages in volts (`_V`), frequencies in hertz
@@ -17,9 +17,10 @@ import { legibilitySchema } from './legibility-schema';
 import { orientationSchema } from './orientation-schema';
 import { loadSettingsSchema } from '../load/load-settings';
 import { bounded, boundedAbove, LIMITS } from './bounds';
+import { glassArtSchema } from './glass-art-schema';
 
 export const DESIGN_FORMAT = 'sunglyph-design';
-export const DESIGN_VERSION = 5;
+export const DESIGN_VERSION = 6;
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const id = () =>
@@ -156,7 +157,8 @@ export const designSchema = z.strictObject({
 	legibility: legibilitySchema,
 	orientation: orientationSchema,
 	/** Optional electrical-load inputs (battery, budget, ITO traces); defaults when absent. */
-	load: loadSettingsSchema.optional()
+	load: loadSettingsSchema.optional(),
+	glassArt: glassArtSchema
 });
 
 export type Point = z.infer<typeof pointSchema>;

@@ -9,6 +9,7 @@ import { LEGIBILITY_CODES } from './codes-legibility';
 import { VIEW_ANGLE_CODES } from './codes-viewangle';
 import { LOAD_CODES } from './codes-load';
 import { RELIABILITY_CODES } from './codes-reliability';
+import { GLASS_CODES } from './codes-glass';
 
 export interface FindingCode {
 	code: string;
@@ -19,11 +20,12 @@ export const FINDING_CODES: readonly FindingCode[] = [
 	...DRIVE_AND_OPTICS_CODES,
 	...WIRING_CODES,
 	...RULE_CODES,
+	...LOAD_CODES,
 	...LEGIBILITY_CODES,
 	...VIEW_ANGLE_CODES,
-];
-export const FINDING_CODES: readonly FindingCode[] = [...DRIVE_AND_OPTICS_CODES, ...LOAD_CODES];
+	...GLASS_CODES,
 	...RELIABILITY_CODES
+];
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));
 

@@ -10,10 +10,12 @@ const ENTITIES: Record<string, string> = {
 
 /** Escapes text for HTML and drops C0/C1 control characters (other than tab and newline). */
 export function escapeHtml(text: string): string {
-	return text
-		// eslint-disable-next-line no-control-regex -- removing control characters is the point
-		.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g, '')
-		.replace(/[<>&"']/g, (c) => ENTITIES[c]);
+	return (
+		text
+			// eslint-disable-next-line no-control-regex -- removing control characters is the point
+			.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g, '')
+			.replace(/[<>&"']/g, (c) => ENTITIES[c])
+	);
 }
 
 /** A table with a header row; cells are escaped unless given as `{ html }`. */

@@ -1,0 +1,118 @@
+/**
+ * The routing grid of one plate: square cells of one trace pitch (trace width + minimum gap), each
+ * holding the net that owns it (a conductor of that net lies within the clearance of the cell's
+ * centre), FREE, BLOCKED (two nets, or outside the plate's domain) and an extra cost (e.g. over the
+ * other plate's conductors, where a lead would light a ghost).
+ *
+ * A cell is owned by a net when its centre lies inside a conductor or within `clearance_mm` of its
+ * edge, with clearance = minimum gap + half the trace width: a lead centred on a free cell then
+ * keeps the minimum gap to every other net's conductor (to within the grid's discretisation, which
+ * the glass check measures afterwards on the real geometry).
+ */
+import type { Rect } from '../design/schema';
+import { pointInRing } from '../geometry/polygon';
+import { ringBounds } from './rings';
+
+export const FREE = -1;
+export const BLOCKED = -2;
+
+function distanceToRing2(ring: Float64Array, px: number, py: number): number {
+	let best = Infinity;
+	const n = ring.length;
+	for (let i = 0, j = n - 2; i < n; j = i, i += 2) {
+		const ax = ring[j],
+			ay = ring[j + 1];
+		const dx = ring[i] - ax,
+			dy = ring[i + 1] - ay;
+		const len2 = dx * dx + dy * dy;
+		const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((px - ax) * dx + (py - ay) * dy) / len2));
+		const ex = ax + dx * t - px,
+			ey = ay + dy * t - py;
+		const d2 = ex * ex + ey * ey;
+		if (d2 < best) best = d2;
+	}
+	return best;
+}
+
+export class RouteGrid {
+	readonly x0: number;
+	readonly y0: number;
+	readonly nx: number;
+	readonly ny: number;
+	readonly owner: Int32Array;
+	readonly cost: Float32Array;
+
+	constructor(options: { domain: Rect; cell_mm: number }) {
+		const { domain, cell_mm } = options;
+		this.cell_mm = cell_mm;
+		this.x0 = domain.x_mm;
+		this.y0 = domain.y_mm;
+		this.nx = Math.max(1, Math.floor(domain.width_mm / cell_mm));
+		this.ny = Math.max(1, Math.floor(domain.height_mm / cell_mm));
+		if (this.nx * this.ny > 8_000_000)
+			throw new RangeError('the glass is too large for the routing grid at this trace pitch');
+		this.owner = new Int32Array(this.nx * this.ny).fill(FREE);
+		this.cost = new Float32Array(this.nx * this.ny);
+	}
+
+	readonly cell_mm: number;
+
+	centreX = (ix: number): number => this.x0 + (ix + 0.5) * this.cell_mm;
+	centreY = (iy: number): number => this.y0 + (iy + 0.5) * this.cell_mm;
+
+	/** Calls `visit(cell, inside)` for every cell whose centre lies inside or within `reach_mm` of the ring. */
+	forCellsNear(
+		ring: Float64Array,
+		reach_mm: number,
+		visit: (cell: number, inside: boolean) => void
+	) {
+		const b = ringBounds(ring);
+		const c = this.cell_mm;
+		const ix0 = Math.max(0, Math.floor((b.minX - reach_mm - this.x0) / c));
+		const ix1 = Math.min(this.nx - 1, Math.ceil((b.maxX + reach_mm - this.x0) / c));
+		const iy0 = Math.max(0, Math.floor((b.minY - reach_mm - this.y0) / c));
+		const iy1 = Math.min(this.ny - 1, Math.ceil((b.maxY + reach_mm - this.y0) / c));
+		const reach2 = reach_mm * reach_mm;
+		for (let iy = iy0; iy <= iy1; iy++) {
+			const y = this.centreY(iy);
+			for (let ix = ix0; ix <= ix1; ix++) {
+				const x = this.centreX(ix);
+				const inside = pointInRing(ring, { x, y });
+				if (inside || (reach_mm > 0 && distanceToRing2(ring, x, y) < reach2 - 1e-12))
+					visit(iy * this.nx + ix, inside);
+			}
+		}
+	}
+
+	/** Marks the cells a conductor of `net` keeps clear of other nets. */
+	claim(ring: Float64Array, net: number, clearance_mm: number): void {
+		const owner = this.owner;
+		this.forCellsNear(ring, clearance_mm, (cell) => {
+			const o = owner[cell];
+			if (o === FREE) owner[cell] = net;
+			else if (o !== net) owner[cell] = BLOCKED;
+		});
+	}
+
+	/** Adds `extra` to the cost of every cell whose centre lies inside the ring (or within reach). */
+	addCost(ring: Float64Array, extra: number, reach_mm = 0): void {
+		this.forCellsNear(ring, reach_mm, (cell) => {
+			this.cost[cell] += extra;
+		});
+	}
+
+	/** Cells whose centre lies inside the ring; the nearest cell when none does (a small ring). */
+	cellsInside(ring: Float64Array): number[] {
+		const cells: number[] = [];
+		this.forCellsNear(ring, 0, (cell, inside) => {
+			if (inside) cells.push(cell);
+		});
+		if (cells.length === 0) {
+			const b = ringBounds(ring);
+			const ix = Math.floor(((b.minX + b.maxX) / 2 - this.x0) / this.cell_mm);
+			const iy = Math.floor(((b.minY + b.maxY) / 2 - this.y0) / this.cell_mm);
+			if (ix >= 0 && iy >= 0 && ix < this.nx && iy < this.ny) cells.push(iy * this.nx + ix);
+		}
+		return cells;
+	}
+}

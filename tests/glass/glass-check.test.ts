@@ -1,0 +1,199 @@
+/**
+ * The glass check on small hand-made designs whose answers follow from plain geometry, worked by
+ * hand beside each case (rectangles grown by a margin, strips crossing strips).
+ */
+import { describe, expect, it } from 'vitest';
+import { applyPatch } from '../../src/lib/core/commands/patch';
+import { invertPatch } from '../../src/lib/core/commands/patch-algebra';
+import { generateGlass } from '../../src/lib/core/commands/generate-glass';
+import { addTrace, setGlassArt } from '../../src/lib/core/commands/set-glass-art';
+import { CommandError } from '../../src/lib/core/commands/command-error';
+import type { Design } from '../../src/lib/core/design/schema';
+import { platePieces } from '../../src/lib/core/glass/back-plate-pieces';
+import { checkGlass } from '../../src/lib/core/glass/check-glass';
+import { planGlass } from '../../src/lib/core/glass/plan-glass';
+import { glassExportFiles } from '../../src/lib/core/export/glass-export';
+import { signedArea } from '../../src/lib/core/geometry/polygon';
+import { expectWithin } from '../helpers/tolerance';
+import { electrode, emptyDesign } from '../commands/fixtures';
+
+const rect = (x: number, y: number, w: number, h: number) => [
+	{ x, y },
+	{ x: x + w, y },
+	{ x: x + w, y: y + h },
+	{ x, y: y + h }
+];
+
+/** Glass 30 × 20 mm, ledge at the bottom; E1 (COM1, SEG1) and E2 (COM2, SEG2), 5 mm apart. */
+function twoElectrodes(): Design {
+	return {
+		...emptyDesign(),
+		glass: {
+			width_mm: 30,
+			height_mm: 20,
+			viewingArea: { x_mm: 3, y_mm: 3, width_mm: 24, height_mm: 11 }
+		},
+		commons: [
+			{ id: 'com1', name: 'COM1' },
+			{ id: 'com2', name: 'COM2' }
+		],
+		segmentLines: [
+			{ id: 'seg1', name: 'SEG1' },
+			{ id: 'seg2', name: 'SEG2' }
+		],
+		electrodes: [
+			electrode('e1', rect(5, 5, 5, 3), { common: 'com1', line: 'seg1' }),
+			electrode('e2', rect(15, 5, 5, 3), { common: 'com2', line: 'seg2' })
+		]
+	};
+}
+
+const codes = (d: Design) => checkGlass(d).findings.map((f) => f.code);
+
+describe('back plates', () => {
+	it('grow a rectangle by the overlap margin on every side', () => {
+		const { pieces } = platePieces(twoElectrodes());
+		// A 5 × 3 mm rectangle grown by 0.1 mm per side: 5.2 × 3.2 = 16.64 mm² (square mitred corners).
+		expectWithin(
+			pieces.map((p) => ({
+				label: p.electrode.id,
+				expected: 16.64,
+				actual: Math.abs(signedArea(p.grown[0]))
+			})),
+			{ tolerance: 1e-9, unit: 'mm²', source: 'hand calculation: (5 + 2·0.1)(3 + 2·0.1)' }
+		);
+	});
+
+	it('name the electrodes that force two commons to touch', () => {
+		const d = twoElectrodes();
+		// E2 moved to 0.02 mm from E1, below the 0.05 mm minimum gap.
+		const close = {
+			...d,
+			electrodes: [d.electrodes[0], { ...d.electrodes[1], outline: rect(10.02, 5, 5, 3) }]
+		};
+		const f = checkGlass(close).findings.find((x) => x.code === 'glass.commons-touch');
+		expect(f?.electrodes).toEqual(['e1', 'e2']);
+		expect(f?.severity).toBe('fail');
+	});
+});
+
+describe('generation', () => {
+	it('routes every electrode to its pad, passes the check, and undoes exactly', () => {
+		const d = twoElectrodes();
+		expect(codes(d)).toContain('glass.open');
+		const patch = generateGlass(d);
+		const after = applyPatch(d, patch);
+		expect(after.glassArt.traces.length).toBeGreaterThan(0);
+		expect(after.glassArt.transfers.map((t) => t.common)).toEqual(['com1', 'com2']);
+		const report = checkGlass(after);
+		expect(report.findings.filter((f) => f.severity === 'fail')).toEqual([]);
+		expect(applyPatch(after, invertPatch(patch))).toEqual(d);
+	});
+
+	it('reports a named finding when no route exists', () => {
+		const d = twoElectrodes();
+		// A closed ring of SEG1 around an island of SEG2: the island has no way out on its plate.
+		const ring = electrode('ring', rect(4, 4, 8, 6), {
+			common: 'com1',
+			line: 'seg1',
+			holes: [rect(6, 6, 4, 2)]
+		});
+		const island = electrode('island', rect(7, 6.5, 2, 1), { common: 'com2', line: 'seg2' });
+		const enclosed = {
+			...d,
+			electrodes: [ring, island, { ...d.electrodes[1], common: 'com2' as const }]
+		};
+		const plan = planGlass(enclosed);
+		const noRoute = plan.findings.filter((f) => f.code === 'glass.no-route');
+		expect(noRoute.flatMap((f) => f.electrodes)).toContain('island');
+	});
+});
+
+describe('ghosts, shorts and bad geometry', () => {
+	/** The two-electrode glass, generated, plus one hand-drawn SEG1 lead. */
+	function withHandTrace(points: { x: number; y: number }[], width_mm: number): Design {
+		const d = twoElectrodes();
+		const routed = applyPatch(d, generateGlass(d));
+		return applyPatch(
+			routed,
+			addTrace(routed, { id: 'hand', plate: 'segment', net: 'seg1', width_mm, points })
+		);
+	}
+
+	it("reports a hand lead across another common's back plate with its pair and area", () => {
+		// The last run lies at y = 8.07 (band 8.05–8.09), inside COM2's plate margin under E2
+		// (plate 14.9–20.1 × 4.9–8.1) and 0.05 mm clear of E2 itself: overlap 5.2 × 0.04 = 0.208 mm².
+		const d = withHandTrace(
+			[
+				{ x: 9.9, y: 6.5 },
+				{ x: 12, y: 6.5 },
+				{ x: 12, y: 8.07 },
+				{ x: 22, y: 8.07 }
+			],
+			0.04
+		);
+		const report = checkGlass(d);
+		const ghosts = report.ghosts.filter((g) => g.conductor === 'hand');
+		expect(ghosts.map((g) => [g.commonName, g.lineName, g.where])).toEqual([
+			['COM2', 'SEG1', 'visible']
+		]);
+		expectWithin([{ label: 'ghost area', expected: 0.208, actual: ghosts[0].area_mm2 }], {
+			tolerance: 1e-9,
+			unit: 'mm²',
+			source: 'hand calculation: 5.2 mm × 0.04 mm strip'
+		});
+		const f = report.findings.find((x) => x.code === 'glass.ghost-visible');
+		expect(f?.message).toContain('(COM2, SEG1)');
+		expect(f?.electrodes).toContain('e2');
+		const composite = glassExportFiles(d, ['svg']).find((x) => x.name.endsWith('-composite.svg'))!;
+		expect(composite.content).toMatch(
+			/<path id="ghost-\d+" data-pair="COM2\/SEG1" data-where="visible"/
+		);
+	});
+
+	it('reports a lead that runs into another line as a short', () => {
+		const d = withHandTrace(
+			[
+				{ x: 9.9, y: 6.5 },
+				{ x: 17, y: 6.5 }
+			],
+			0.1
+		);
+		expect(codes(d)).toContain('glass.short');
+	});
+
+	it('names self-crossing, zero-area and off-glass electrodes', () => {
+		const d = twoElectrodes();
+		const bowTie = electrode('bow', [
+			{ x: 5, y: 10 },
+			{ x: 7, y: 12 },
+			{ x: 7, y: 10 },
+			{ x: 5, y: 12 }
+		]);
+		const flat = electrode('flat', [
+			{ x: 20, y: 10 },
+			{ x: 22, y: 10 },
+			{ x: 24, y: 10 }
+		]);
+		const off = electrode('off', rect(28, 2, 5, 2));
+		const report = checkGlass({ ...d, electrodes: [...d.electrodes, bowTie, flat, off] });
+		const by = (code: string) =>
+			report.findings.filter((f) => f.code === code).flatMap((f) => f.electrodes);
+		expect(by('glass.bad-outline').sort()).toEqual(['bow', 'flat']);
+		expect(by('glass.off-glass')).toEqual(['off']);
+	});
+
+	it('checks the ledge against its connector', () => {
+		const d = twoElectrodes();
+		const pins = applyPatch(d, setGlassArt(d, { ledge: { connector: 'metal-pin', depth_mm: 2 } }));
+		expect(codes(pins)).toContain('glass.pitch-connector');
+		expect(codes({ ...pins, pinout: { ...pins.pinout, pitch_mm: 2.54 } })).not.toContain(
+			'glass.pitch-connector'
+		);
+		expect(
+			codes(applyPatch(d, setGlassArt(d, { ledge: { connector: 'elastomeric', depth_mm: 2 } })))
+		).toContain('glass.ledge-short');
+		expect(() => setGlassArt(d, { overlapMargin_mm: 5 })).toThrow(CommandError);
+		expect(() => setGlassArt(d, { overlapMargin_mm: 5 })).toThrow(/glassArt\.overlapMargin_mm/);
+	});
+});
