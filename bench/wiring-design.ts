@@ -9,7 +9,6 @@ import { generateSevenSegment } from '../src/lib/core/glyphs/seven-segment';
 export function wiringBenchDesign(): Design {
 	const electrodes: Electrode[] = [];
 	const groups: Design['groups'] = [];
-	const blank = { holes: [], common: null, line: null, locked: false } as const;
 	for (let k = 0; k < 60; k++) {
 		const x_mm = 5 + (k % 10) * 10;
 		const y_mm = 5 + Math.floor(k / 10) * 16;
@@ -30,7 +29,10 @@ export function wiringBenchDesign(): Design {
 				name: `${k}${part.key}`,
 				kind: 'segment',
 				outline: part.outline,
-				...blank
+				holes: [],
+				common: null,
+				line: null,
+				locked: false
 			});
 			return id;
 		});
@@ -48,7 +50,10 @@ export function wiringBenchDesign(): Design {
 				{ x: x + 3, y: 105 },
 				{ x, y: 105 }
 			],
-			...blank
+			holes: [],
+			common: null,
+			line: null,
+			locked: false
 		});
 	}
 	const demo = demoDesign();
