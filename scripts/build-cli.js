@@ -24,6 +24,8 @@ const result = await build({
 	keepNames: true,
 	outdir,
 	metafile: true,
+	// paper.js reaches for optional DOM packages in Node; it stays a runtime import from node_modules.
+	external: ['paper', 'paper/*'],
 	logLevel: 'warning'
 });
 const inputs = Object.keys(result.metafile.inputs).filter((p) => !p.startsWith('node_modules/'));

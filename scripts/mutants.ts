@@ -16,6 +16,8 @@ const DRIVE = ['tests/drive'];
 const OPTICS = ['tests/optics', 'tests/cell'];
 const COLOR = ['tests/color'];
 const LC = ['tests/lc'];
+const LEGIBILITY = ['tests/legibility'];
+const LOAD = ['tests/load'];
 
 export const MUTANTS: readonly Mutant[] = [
 	{
@@ -167,5 +169,37 @@ export const MUTANTS: readonly Mutant[] = [
 		file: 'src/lib/core/color/lambertian-luminance.ts',
 		edits: [['(reflectance * illuminance_lx) / Math.PI', 'reflectance * illuminance_lx']],
 		tests: COLOR
+	},
+	{
+		id: 'Adrian: Ricco coefficient',
+		file: 'src/lib/core/legibility/adrian-threshold.ts',
+		edits: [['sqrtL: 0.05946 * lb ** 0.466', 'sqrtL: 0.5946 * lb ** 0.466']],
+		tests: LEGIBILITY
+	},
+	{
+		id: 'Adrian: age factor divisor',
+		file: 'src/lib/core/legibility/adrian-threshold.ts',
+		edits: [['(age_years - 19) ** 2 / 2160 + 0.99', '(age_years - 19) ** 2 / 216 + 0.99']],
+		tests: LEGIBILITY
+	},
+	{
+		id: 'visual angle: full size over distance',
+		file: 'src/lib/core/legibility/visual-angle.ts',
+		edits: [
+			['Math.atan(projected_mm / (2 * distance_mm))', 'Math.atan(projected_mm / distance_mm)']
+		],
+		tests: LEGIBILITY
+	},
+	{
+		id: 'capacitance: gap in mm instead of µm',
+		file: 'src/lib/core/load/capacitance.ts',
+		edits: [['/ (gap_um * M_PER_UM)', '/ (gap_um * M_PER_UM * 1000)']],
+		tests: LOAD
+	},
+	{
+		id: 'waveform energy: C·ΔV² without the half',
+		file: 'src/lib/core/load/waveform-energy.ts',
+		edits: [['if (a) kOn += p * 0.5 * dv * dv;', 'if (a) kOn += p * dv * dv;']],
+		tests: LOAD
 	}
 ];

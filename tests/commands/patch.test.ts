@@ -151,6 +151,7 @@ describe('document fields', () => {
 			'cell',
 			'drive',
 			'glass',
+			'glassArt',
 			'legibility',
 			'lighting',
 			'load',

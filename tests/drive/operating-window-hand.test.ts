@@ -45,8 +45,9 @@ describe('operating window, hand-computed', () => {
 				{ label: 'window high', expected: 3.585, actual: result.window!.max_V },
 				// best = √(3.126351708·3.585) = 3.347830771
 				{ label: 'best amplitude', expected: 3.347830771, actual: result.best_V! },
-				// smallest margin in volts: 60 °C off side, 0.095 V
-				{ label: 'margin', expected: 0.095, actual: result.margin_V }
+				// the tightest margin is the smallest percentage (below), and its volts come from the
+				// same limit: the −10 °C on side, 1.905255888 − 1.805 = 0.100255888 V
+				{ label: 'margin', expected: 0.100255888, actual: result.margin_V }
 			],
 			{ tolerance: 1e-8, unit: 'V', source: SOURCE }
 		);

@@ -12,6 +12,8 @@ function asVersion3(options: { distance_mm: number; reflector: string }): Record
 	const doc = JSON.parse(serializeDesign(demo));
 	doc.version = 3;
 	delete doc.legibility;
+	delete doc.orientation;
+	delete doc.glassArt;
 	doc.viewing = { distance_mm: options.distance_mm };
 	doc.cell.reflector = { kind: options.reflector };
 	return doc;
@@ -20,7 +22,7 @@ function asVersion3(options: { distance_mm: number; reflector: string }): Record
 describe('design document version 4 (legibility)', () => {
 	it('lifts a version-3 document with default scenarios at its viewing distance, nothing else changed', () => {
 		const old = asVersion3({ distance_mm: 900, reflector: 'brushed-metal' });
-		const result = migrateDocument(old);
+		const result = migrateDocument(old, { targetVersion: 4 });
 		expect(result.ok).toBe(true);
 		if (!result.ok) return;
 		const { legibility, ...rest } = result.document as Record<string, unknown> & {

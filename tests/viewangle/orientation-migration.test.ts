@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../src/lib/core/design/demo';
 import { DESIGN_MIGRATIONS } from '../../src/lib/core/design/migrations';
+import { DESIGN_VERSION } from '../../src/lib/core/design/schema';
 import { parseDesignValue, serializeDesign } from '../../src/lib/core/design/parse-design';
 import {
 	DEFAULT_ORIENTATION,
@@ -12,6 +13,7 @@ function asVersion4(): Record<string, unknown> {
 	const doc = JSON.parse(serializeDesign(demoDesign()));
 	doc.version = 4;
 	delete doc.orientation;
+	delete doc.glassArt;
 	return doc;
 }
 
@@ -25,10 +27,10 @@ describe('design document version 5: cell orientation', () => {
 		const result = parseDesignValue(v4);
 		expect(result.ok).toBe(true);
 		if (result.ok) {
-			expect(result.design.version).toBe(5);
-			const { orientation, version: _v, ...others } = result.design;
+			expect(result.design.version).toBe(DESIGN_VERSION);
+			const { orientation, version: _v, glassArt: _g, ...others } = result.design;
 			expect(orientation).toEqual(DEFAULT_ORIENTATION);
-			const { orientation: _o, version: _w, ...demoOthers } = demoDesign();
+			const { orientation: _o, version: _w, glassArt: _h, ...demoOthers } = demoDesign();
 			expect(others).toEqual(demoOthers);
 		}
 	});

@@ -2,7 +2,7 @@
 import { parseArgs } from 'node:util';
 import { analyzeDrive } from '../../lib/core/drive/analyze-drive';
 import { parseBias, parseInteger, parseNumberWithin } from '../parse-numbers';
-import { BOUNDS } from '../../lib/core/design/bounds';
+import { BOUNDS } from '../../lib/core/design/bound-ranges';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
