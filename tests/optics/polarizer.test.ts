@@ -51,7 +51,7 @@ describe('polarizers', () => {
 		const actual = idealPair(0);
 		checkAgainstReference({
 			label: 'parallel ideal pair',
-			source: 'definition of singlePassTransmittance',
+			source: "Malus's law at 0° (an ideal parallel pair passes all of the polarised light)",
 			actual,
 			expected: new Float64Array(actual.length).fill(1),
 			tolerance: 1e-15,
