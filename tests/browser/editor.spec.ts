@@ -111,7 +111,9 @@ test('Escape cancels a drag in progress', async ({ page }) => {
 	await expect(page.getByTestId('action-undo')).toBeDisabled();
 });
 
-test('recovers unsaved work after a reload, and Discard returns to the demo', async ({ page }) => {
+test('recovers unsaved work in a fresh tab, and setting it aside returns to the demo', async ({
+	page
+}) => {
 	await page.reload();
 	await waitForEditor(page);
 	await expect(electrodes(page)).toHaveCount(53);
@@ -121,17 +123,19 @@ test('recovers unsaved work after a reload, and Discard returns to the demo', as
 	await drag(page, await screenOf(page, 45, 36), await screenOf(page, 48, 39));
 	await expect(electrodes(page)).toHaveCount(54);
 	await page.waitForTimeout(1200); // autosave is debounced
+	// The same tab reloads its own design silently; a fresh tab is offered it as recovered work.
 	await page.reload();
 	await waitForEditor(page);
-	await expect(page.getByTestId('recovered-notice')).toContainText('Recovered unsaved work from');
 	await expect(electrodes(page)).toHaveCount(54);
-	await page.getByTestId('recovered-discard').click();
-	await expect(electrodes(page)).toHaveCount(53);
-	await expect(page.getByTestId('recovered-notice')).toHaveCount(0);
-	await page.reload();
-	await waitForEditor(page);
-	await expect(electrodes(page)).toHaveCount(53);
-	await expect(page.getByTestId('recovered-notice')).toHaveCount(0);
+	const fresh = await page.context().newPage();
+	await page.close();
+	await fresh.goto('/');
+	await waitForEditor(fresh);
+	await expect(fresh.getByTestId('recovered-notice')).toContainText('Recovered unsaved work from');
+	await expect(electrodes(fresh)).toHaveCount(54);
+	await fresh.getByTestId('recovered-discard').click();
+	await expect(electrodes(fresh)).toHaveCount(53);
+	await expect(fresh.getByTestId('recovered-notice')).toHaveCount(0);
 });
 
 test('saves the edited design to a file and opens it again', async ({ page }) => {

@@ -67,18 +67,8 @@ for (const size of SIZES) {
 			expect(footer.y + footer.height).toBeLessThanOrEqual(size.height + 1);
 		});
 
-		test('nine check tabs still fit the column', async ({ page }) => {
+		test('all nine check tabs fit the column', async ({ page }) => {
 			await openApp(page);
-			// Six more tabs, as further checks will add, must wrap inside the column.
-			await page.evaluate(() => {
-				const list = document.querySelector('[role="tablist"][aria-label="Checks"]')!;
-				const model = list.querySelector('[role="tab"]')!;
-				for (const name of ['Wiring', 'Rules', 'Load', 'Legibility', 'Viewing angle', 'Glass']) {
-					const tab = model.cloneNode(false) as HTMLElement;
-					tab.textContent = name;
-					list.appendChild(tab);
-				}
-			});
 			const checks = (await page.getByTestId('checks').boundingBox())!;
 			const tabs = await boxes(page, '[role="tablist"][aria-label="Checks"] [role="tab"]');
 			expect(tabs).toHaveLength(9);

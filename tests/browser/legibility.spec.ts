@@ -25,6 +25,7 @@ test('type a reading, switch scenarios: the preview and the verdict follow', asy
 
 	// reading from 5 m: the digits become too small for the distance
 	await page.getByTestId('scenario-distance').fill('5000');
+	await page.getByTestId('scenario-distance').press('Enter');
 	await expect(verdict).toContainText('not readable');
 	await expect(verdict).toContainText('too small for the distance');
 	await expect(page.getByTestId('legibility-verdict')).toContainText('legibility.too-small');

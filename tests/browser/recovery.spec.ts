@@ -15,7 +15,8 @@ async function waitForEditor(page: Page) {
 	await expect(page.locator('[data-autosave="on"]')).toHaveCount(1);
 }
 
-test('opening a file after a recovery retires the recovery notice', async ({ page }) => {
+test('opening a file after a recovery retires the recovery notice', async ({ page: first }) => {
+	let page = first;
 	await openApp(page);
 	await waitForEditor(page);
 	await page.getByTestId('tool-oval').click();
@@ -27,7 +28,11 @@ test('opening a file after a recovery retires the recovery notice', async ({ pag
 	await page.mouse.up();
 	await expect(page.locator('[data-electrode]')).toHaveCount(54);
 	await page.waitForTimeout(1200); // autosave is debounced
-	await page.reload();
+	// A fresh tab is offered the unsaved work as recovered work.
+	const fresh = await page.context().newPage();
+	await page.close();
+	page = fresh;
+	await page.goto('/');
 	await waitForEditor(page);
 	await expect(page.getByTestId('recovered-notice')).toBeVisible();
 
