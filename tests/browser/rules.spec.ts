@@ -45,6 +45,7 @@ test('a narrowed gap shows up as a rule finding that selects and shows its elect
 
 	// Loosening the limit below the gap clears the finding; undo brings it back.
 	await page.getByTestId('rule-limit-minGap_mm').fill('0.005');
+	await page.getByTestId('rule-limit-minGap_mm').press('Enter');
 	await expect(gap).toHaveCount(0);
 	await page.getByTestId('action-undo').click();
 	await expect(page.getByTestId('rule-limit-minGap_mm')).toHaveValue('0.05');
