@@ -15,7 +15,7 @@ describe('CIELAB', () => {
 			quantity: 'L*',
 			unit: 'L* units',
 			tolerance: 5e-4,
-			source: 'values derived from the CIE 15:2004 L* formula',
+			source: 'CIE 15:2004 L* formula evaluated by hand (Y = 18 % gives L* 49.496, the mid grey)',
 			rows: [
 				{ label: 'Y = 18 %', computed: lightnessOf(18), published: 49.496 },
 				{ label: 'Y = 25 %', computed: lightnessOf(25), published: 57.075 },

@@ -53,7 +53,7 @@ describe('Jakeman-Raynes response times', () => {
 		}
 		expectReference({
 			label: 'τ (director)',
-			source: 'values derived from τ_off = γ1·d²/(K·π²) (Jakeman & Raynes 1972)',
+			source: 'Jakeman & Raynes 1972 closed form, by hand (consistency check)',
 			unit: 'ms',
 			tolerance: 0.5,
 			rows

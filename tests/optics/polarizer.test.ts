@@ -160,7 +160,7 @@ describe('polarizers', () => {
 		// tolerance: half a unit of the last kept digit (5e-4 for 0.430/0.370, 5e-6 for 4.3e-4)
 		checkAgainstReference({
 			label: 'T_s, T_p',
-			source: 'values derived from T_s = (k1 + k2)/2, T_p = (k1² + k2²)/2',
+			source: 'hand computation: T_s = (k1 + k2)/2, T_p = (k1² + k2²)/2 (Jones calculus)',
 			actual: actual.slice(0, 2),
 			expected: [0.43, 0.37],
 			tolerance: 5e-4,
@@ -168,7 +168,7 @@ describe('polarizers', () => {
 		});
 		checkAgainstReference({
 			label: 'T_c',
-			source: 'value derived from T_c = k1·k2',
+			source: 'hand computation: T_c = k1·k2 (Jones calculus)',
 			actual: actual.slice(2),
 			expected: [4.3e-4],
 			tolerance: 5e-6,
