@@ -24,8 +24,12 @@ const result = await build({
 	keepNames: true,
 	outdir,
 	metafile: true,
-	// paper.js reaches for optional DOM packages in Node; it stays a runtime import from node_modules.
-	external: ['paper', 'paper/*'],
+	// paper.js tries optional DOM packages in Node inside try/catch; they are never bundled.
+	external: ['jsdom', 'jsdom/*', 'canvas'],
+	// CommonJS dependencies (paper.js) call require() for Node built-ins: give each chunk one.
+	banner: {
+		js: "import { createRequire as createRequireForChunk } from 'node:module'; const require = createRequireForChunk(import.meta.url);"
+	},
 	logLevel: 'warning'
 });
 const inputs = Object.keys(result.metafile.inputs).filter((p) => !p.startsWith('node_modules/'));
