@@ -47,7 +47,12 @@ export const MUTANTS: readonly Mutant[] = [
 	{
 		id: 'window: off-side percent over V90',
 		file: 'src/lib/core/drive/operating-window.ts',
-		edits: [['(100 * offMargin_V) / point.v10_V', '(100 * offMargin_V) / point.v90_V']],
+		edits: [
+			[
+				"consider('off', point.temperature_C, offMargin_V, point.v10_V);",
+				"consider('off', point.temperature_C, offMargin_V, point.v90_V);"
+			]
+		],
 		tests: DRIVE
 	},
 	{
