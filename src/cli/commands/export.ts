@@ -2,8 +2,7 @@
 import { mkdir, rename, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { parseArgs } from 'node:util';
-import { formatIssue } from '../../lib/core/design/issues';
-import { parseDesignText } from '../../lib/core/design/parse-design';
+import { readDesignFile } from '../read-design';
 import {
 	EXPORT_FORMATS,
 	glassExportFiles,
@@ -64,22 +63,8 @@ export async function runExport(args: string[], io: CliIo): Promise<number> {
 	if (!values.out) throw new CliError('--out: expected a folder for the files');
 	const formats = parseFormats(values.format);
 	const path = positionals[0];
-	let text: string;
-	try {
-		text = await io.readFile(path);
-	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
-	}
-	const parsed = parseDesignText(text);
-	if (!parsed.ok) {
-		io.err(
-			`${path}: invalid design\n` +
-				parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') +
-				'\n'
-		);
-		return EXIT.badInput;
-	}
+	const parsed = await readDesignFile(path, io);
+	if (!parsed.ok) return parsed.exitCode;
 	let design = parsed.design;
 	const planFindings = [];
 	if (values.generate) {

@@ -1,7 +1,6 @@
 /** `sunglyph legibility <design.json>`: every light scenario, its luminances, contrast and verdicts. */
 import { parseArgs } from 'node:util';
-import { parseDesignText } from '../../lib/core/design/parse-design';
-import { formatIssue } from '../../lib/core/design/issues';
+import { readDesignFile } from '../read-design';
 import { analyzeCell } from '../../lib/core/cell/analyze-cell';
 import {
 	analyzeLegibility,
@@ -47,22 +46,8 @@ export async function runLegibility(args: string[], io: CliIo): Promise<number> 
 	if (!['cold', 'room', 'hot'].includes(end))
 		throw new CliError(`--end: expected cold, room or hot, got "${values.end}"`);
 	const path = positionals[0];
-	let text: string;
-	try {
-		text = await io.readFile(path);
-	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
-	}
-	const parsed = parseDesignText(text);
-	if (!parsed.ok) {
-		io.err(
-			`${path}: invalid design\n` +
-				parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') +
-				'\n'
-		);
-		return EXIT.badInput;
-	}
+	const parsed = await readDesignFile(path, io);
+	if (!parsed.ok) return parsed.exitCode;
 	const design = parsed.design;
 	const known = design.legibility.scenarios.map((s) => s.name);
 	for (const name of values.scenario ?? []) {

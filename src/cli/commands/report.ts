@@ -1,7 +1,6 @@
 /** `sunglyph report <design.json> --out <file>`: the printable design report, HTML or PDF. */
 import { parseArgs } from 'node:util';
-import { parseDesignText } from '../../lib/core/design/parse-design';
-import { formatIssue } from '../../lib/core/design/issues';
+import { readDesignFile } from '../read-design';
 import { analyzeDesignWithCell } from '../../lib/core/analyze-design';
 import { designReportHtml, type PaperSize } from '../../lib/core/export/report/design-report-html';
 import { CliError, EXIT } from '../cli-error';
@@ -47,22 +46,8 @@ export async function runReport(args: string[], io: CliIo): Promise<number> {
 	if (paper !== 'a4' && paper !== 'letter')
 		throw new CliError(`--paper: expected a4 or letter, got "${paper}"`);
 	const path = positionals[0];
-	let text: string;
-	try {
-		text = await io.readFile(path);
-	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
-	}
-	const parsed = parseDesignText(text);
-	if (!parsed.ok) {
-		io.err(
-			`${path}: invalid design\n` +
-				parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') +
-				'\n'
-		);
-		return EXIT.badInput;
-	}
+	const parsed = await readDesignFile(path, io);
+	if (!parsed.ok) return parsed.exitCode;
 	const design = parsed.design;
 	const html = designReportHtml({
 		design,
