@@ -22,16 +22,20 @@ const host = process.env.HOST ?? '127.0.0.1';
 const { handler } = await import(pathToFileURL(resolve(dir, 'handler.js')).href);
 const clientDir = resolve(dir, 'client');
 
-const notFound = (res) => {
+// One line per refused request, in the same form as the app's own (src/lib/server/request-log.ts).
+const notFound = (req, res) => {
+	// eslint-disable-next-line no-control-regex
+	const path = (req.url ?? '/').split('?')[0].replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
+	console.warn(`404 ${req.method} ${path.slice(0, 200)}: no such file`);
 	if (res.headersSent) return void res.destroy();
 	res.writeHead(404, { 'content-type': 'text/plain; charset=utf-8' }).end('Not found');
 };
 
 const server = createServer((req, res) => {
-	guardStreamErrors(res, notFound);
-	if (!guardStaticRequest(req, clientDir)) return notFound(res);
+	guardStreamErrors(res, () => notFound(req, res));
+	if (!guardStaticRequest(req, clientDir)) return notFound(req, res);
 	try {
-		handler(req, res, () => notFound(res));
+		handler(req, res, () => notFound(req, res));
 	} catch (error) {
 		console.error(error);
 		if (!res.headersSent) res.writeHead(500).end('Internal error');
