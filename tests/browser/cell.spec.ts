@@ -1,18 +1,64 @@
 import { expect, test } from '@playwright/test';
 import { openApp } from './ready';
+import { readPlot } from './plot-reading';
+import { readFileSync } from 'node:fs';
+import { parseDesignText } from '../../src/lib/core/design/parse-design';
+import { analyzeCell } from '../../src/lib/core/cell/analyze-cell';
 
-test('the cell panel shows predicted colours, curves and reacts to the gap', async ({ page }) => {
+test('the cell panel draws the predicted curves where the cell model puts them', async ({
+	page
+}) => {
+	// The UI must show what the core cell model computes for the demo (the model itself is checked
+	// against published values in tests/lc and tests/optics); here the check is that each plot
+	// draws those numbers in the right place.
+	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
+	if (!parsed.ok) throw new Error('the demo design does not parse');
+	const demo = parsed.design;
+	const expected = analyzeCell(demo);
 	await openApp(page);
 	await page.getByTestId('view-cell').click();
 	await expect(page.getByTestId('cell-results')).toBeVisible({ timeout: 20_000 });
-	await expect(page.getByTestId('spectra-plot').locator('svg').first()).toBeVisible();
-	await expect(page.getByTestId('eo-plot').locator('svg').first()).toBeVisible();
-	await expect(page.getByTestId('response-plot').locator('svg').first()).toBeVisible();
-	const before = await page.getByTestId('contrast-ratio').textContent();
-	expect(Number.parseFloat(before!)).toBeGreaterThan(3);
+
+	const spectra = await readPlot(page.getByTestId('spectra-plot'));
+	// Background, off and on states, each over the whole visible grid.
+	expect(spectra.lines).toHaveLength(3);
+	for (const line of spectra.lines) expect(line.vertices).toBeGreaterThan(30);
+	expect(spectra.xTicks).toEqual(expect.arrayContaining([400, 500, 600, 700]));
+
+	const eo = await readPlot(page.getByTestId('eo-plot'));
+	expect(eo.lines).toHaveLength(expected.curves.length);
+	// V10 and V90 at each temperature are drawn as dots at the model's voltages (±0.03 V, about
+	// three pixels at this size).
+	// Each dot also sits at 10 % / 90 % of the way from the curve's zero-volt level to saturation.
+	const model = expected.curves.flatMap((c) => [
+		{ v: c.v10_V, Y: c.Y0 - 0.1 * (c.Y0 - c.Ysat) },
+		{ v: c.v90_V, Y: c.Y0 - 0.9 * (c.Y0 - c.Ysat) }
+	]);
+	expect(eo.dots).toHaveLength(model.length);
+	for (const dot of eo.dots) {
+		const v = eo.xValue(dot.cx);
+		const Y = eo.yValue(dot.cy);
+		const nearest = model.reduce((a, b) => (Math.abs(b.v - v) < Math.abs(a.v - v) ? b : a));
+		expect(Math.abs(v - nearest.v), `dot at ${v.toFixed(3)} V`).toBeLessThan(0.03);
+		expect(Math.abs(Y - nearest.Y), `dot at ${v.toFixed(3)} V`).toBeLessThan(0.3);
+	}
+
+	const response = page.getByTestId('response-plot');
+	await expect(response.locator('g[aria-label="line"] path').first()).toBeVisible();
+
+	// A thicker gap moves the cell off its first transmission minimum (Gooch & Tarry, J. Phys. D
+	// 8, 1575, 1975): more leakage in the bright state, so the contrast falls — to the value the
+	// model gives for 7 µm.
+	const before = Number.parseFloat((await page.getByTestId('contrast-ratio').textContent())!);
+	expect(before).toBeCloseTo(expected.contrastRatio, 2);
+	const thicker = analyzeCell({ ...demo, cell: { ...demo.cell, gap_um: 7 } });
+	expect(thicker.contrastRatio).toBeLessThan(expected.contrastRatio);
 	await page.getByTestId('gap-input').fill('7');
 	await page.getByTestId('gap-input').press('Enter');
-	await expect(page.getByTestId('contrast-ratio')).not.toHaveText(before!, { timeout: 20_000 });
+	await expect(page.getByTestId('contrast-ratio')).toHaveText(
+		`${thicker.contrastRatio.toFixed(2)} : 1`,
+		{ timeout: 20_000 }
+	);
 	await expect(page.locator('body')).not.toContainText('NaN');
 });
 

@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { openApp } from './ready';
+import { readPlot } from './plot-reading';
 
 test('type a reading, switch scenarios: the preview and the verdict follow', async ({ page }) => {
 	await openApp(page);
@@ -30,7 +31,23 @@ test('type a reading, switch scenarios: the preview and the verdict follow', asy
 	await expect(verdict).toContainText('too small for the distance');
 	await expect(page.getByTestId('legibility-verdict')).toContainText('legibility.too-small');
 	await expect(page.getByTestId('overall')).toHaveText('Fails checks');
-	await expect(page.getByTestId('legibility-map').locator('svg').first()).toBeVisible();
+	// The map marks the picked scenario (red) at its light and its new 5 m distance, and the map
+	// cell under it is faded (not readable), agreeing with the verdict.
+	const map = await readPlot(page.getByTestId('legibility-map'), { xLog: true, yLog: true });
+	const pickedDot = map.dots.find((d) => d.fill === '#d33')!;
+	expect(pickedDot).toBeDefined();
+	expect(map.dots.length).toBeGreaterThanOrEqual(3);
+	const sunLux = Number(await page.getByTestId('scenario-illuminance').inputValue());
+	expect(map.xValue(pickedDot.cx) / sunLux).toBeCloseTo(1, 1);
+	expect(map.yValue(pickedDot.cy) / 5000).toBeCloseTo(1, 1);
+	const under = map.rects.find(
+		(r) =>
+			pickedDot.cx >= r.x &&
+			pickedDot.cx <= r.x + r.width &&
+			pickedDot.cy >= r.y &&
+			pickedDot.cy <= r.y + r.height
+	)!;
+	expect(under.opacity).toBeLessThan(1);
 	await expect(page.locator('body')).not.toContainText('NaN');
 });
 

@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { openApp } from './ready';
+import { readPlot } from './plot-reading';
 
 test('the load tab shows current, battery life, per-pin tables and plots; a budget fails', async ({
 	page
@@ -9,8 +10,34 @@ test('the load tab shows current, battery life, per-pin tables and plots; a budg
 	await expect(page.getByTestId('load-current')).toContainText('µA');
 	await expect(page.getByTestId('load-lines').locator('tbody tr')).toHaveCount(14);
 	await expect(page.getByTestId('load-commons').locator('tbody tr')).toHaveCount(4);
-	await expect(page.getByTestId('load-plot-temperature').locator('svg')).toBeVisible();
-	await expect(page.getByTestId('load-plot-frame-rate').locator('svg')).toBeVisible();
+	// One line per pattern (all on, a typical reading, all off). The reading's line passes
+	// through the figure shown above the plots: the current at the checked temperature and at
+	// the design's 64 Hz frame rate (to 0.05 µA of the axis reading).
+	const shown_uA = Number.parseFloat((await page.getByTestId('load-current').textContent())!);
+	expect(shown_uA).toBeGreaterThan(0);
+	const READING = '#2f6f9f';
+	const ALL_ON = '#1d1f1a';
+	const ALL_OFF = '#8a4fa0';
+	for (const [testid, at] of [
+		['load-plot-temperature', 25],
+		['load-plot-frame-rate', 64]
+	] as const) {
+		const plot = await readPlot(page.getByTestId(testid));
+		const line = (stroke: string) => plot.lines.find((l) => l.stroke === stroke)!;
+		expect(plot.lines.map((l) => l.stroke).sort()).toEqual([ALL_ON, ALL_OFF, READING].sort());
+		const reading_uA = plot.lineValueAt(line(READING), at);
+		expect(Math.abs(reading_uA - shown_uA), testid).toBeLessThan(0.05);
+		// More segments switching means more charge moved each frame (½·C·ΔV² per step).
+		expect(plot.lineValueAt(line(ALL_ON), at)).toBeGreaterThan(reading_uA);
+		expect(plot.lineValueAt(line(ALL_OFF), at)).toBeLessThan(reading_uA);
+	}
+	// Dynamic current grows with frame rate (I ∝ C·V·f): the reading's line rises to the right.
+	const byRate = await readPlot(page.getByTestId('load-plot-frame-rate'));
+	const rates = byRate.lines
+		.find((l) => l.stroke === READING)!
+		.points.map(([px, py]) => [byRate.xValue(px), byRate.yValue(py)])
+		.sort((a, b) => a[0] - b[0]);
+	expect(rates[rates.length - 1][1]).toBeGreaterThan(rates[0][1]);
 	await expect(page.getByTestId('battery-life')).toHaveText('—');
 	await page.getByTestId('battery-input').fill('220');
 	await page.getByTestId('battery-input').press('Enter');

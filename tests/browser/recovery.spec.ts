@@ -2,7 +2,7 @@
 // Discard can never replace the file just opened.
 import { expect, test, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { openApp } from './ready';
+import { afterAutosave, openApp } from './ready';
 
 async function screenOf(page: Page, x_mm: number, y_mm: number) {
 	const stage = page.getByTestId('editor-stage');
@@ -22,12 +22,13 @@ test('opening a file after a recovery retires the recovery notice', async ({ pag
 	await page.getByTestId('tool-oval').click();
 	const from = await screenOf(page, 45, 36);
 	const to = await screenOf(page, 48, 39);
-	await page.mouse.move(from.x, from.y);
-	await page.mouse.down();
-	await page.mouse.move(to.x, to.y, { steps: 8 });
-	await page.mouse.up();
-	await expect(page.locator('[data-electrode]')).toHaveCount(54);
-	await page.waitForTimeout(1200); // autosave is debounced
+	await afterAutosave(page, async () => {
+		await page.mouse.move(from.x, from.y);
+		await page.mouse.down();
+		await page.mouse.move(to.x, to.y, { steps: 8 });
+		await page.mouse.up();
+		await expect(page.locator('[data-electrode]')).toHaveCount(54);
+	});
 	// A fresh tab is offered the unsaved work as recovered work.
 	const fresh = await page.context().newPage();
 	await page.close();

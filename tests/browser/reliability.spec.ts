@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { afterAutosave } from './ready';
 
 /** Opens the app and waits for hydration, allowing for a busy shared machine. */
 async function openApp(page: Page) {
@@ -118,7 +119,6 @@ test('a kept design this build cannot read is listed and offered, never deleted'
 	for (let i = 0; i < 2; i++) {
 		await page.reload();
 		await expect(page.getByTestId('workspace')).toHaveAttribute('data-autosave', 'on');
-		await page.waitForTimeout(500);
 		await page.getByTestId('designs-list').click();
 		const row = page.getByTestId('recent-designs').locator('li', { hasText: 'From the future' });
 		await expect(row).toContainText('Cannot be read by this version');
@@ -132,11 +132,12 @@ test('a kept design this build cannot read is listed and offered, never deleted'
 test('a second tab opening the same design is told', async ({ context }) => {
 	const first = await context.newPage();
 	await openApp(first);
-	await first.getByTestId('new-design').click();
-	await first.getByTestId('design-name-input').fill('Shared glass');
-	await first.getByTestId('designs-confirm').click();
-	await expect(first.getByTestId('design-name')).toHaveText('Shared glass');
-	await first.waitForTimeout(300);
+	await afterAutosave(first, async () => {
+		await first.getByTestId('new-design').click();
+		await first.getByTestId('design-name-input').fill('Shared glass');
+		await first.getByTestId('designs-confirm').click();
+		await expect(first.getByTestId('design-name')).toHaveText('Shared glass');
+	});
 	const second = await context.newPage();
 	await openApp(second);
 	await expect(second.getByTestId('workspace')).toHaveAttribute('data-autosave', 'on');
