@@ -206,5 +206,24 @@ export const MUTANTS: readonly Mutant[] = [
 		file: 'src/lib/core/load/waveform-energy.ts',
 		edits: [['if (a) kOn += p * 0.5 * dv * dv;', 'if (a) kOn += p * dv * dv;']],
 		tests: LOAD
+	},
+	{
+		id: 'stack: polarisation-kept return without the half',
+		file: 'src/lib/core/optics/stack-evaluator.ts',
+		edits: [
+			[
+				'const kept = 0.5 * frobeniusNormSquared(round);',
+				'const kept = frobeniusNormSquared(round);'
+			]
+		],
+		tests: ['tests/optics/reflective-stack.test.ts']
+	},
+	{
+		id: 'director: twist elastic constant halved',
+		file: 'src/lib/core/lc/director-kernel.ts',
+		edits: [
+			['ws.k22 = options.k22_N / options.k11_N;', 'ws.k22 = (0.5 * options.k22_N) / options.k11_N;']
+		],
+		tests: ['tests/cell/cell-cli.test.ts']
 	}
 ];

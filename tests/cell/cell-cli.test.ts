@@ -53,14 +53,65 @@ describe('sunglyph cell', () => {
 		expectWithin(cases, { tolerance: 1e-5, unit: '(transmittance)', source: 'Gooch & Tarry 1975' });
 	});
 
-	it('gives V10 < V50 < V90 above the analytic threshold and a darker driven state', async () => {
-		const r = JSON.parse((await runCli(['cell', '--json'])).stdout);
-		expect(r.v10_V).toBeLessThan(r.v50_V);
-		expect(r.v50_V).toBeLessThan(r.v90_V);
-		expect(r.on.Y).toBeLessThan(r.off.Y);
-		expect(r.contrastRatio).toBeGreaterThan(3);
-		for (const key of ['Y', 'x', 'y', 'L', 'a', 'b'])
-			expect(Number.isFinite(r.off[key])).toBe(true);
+	it('leaves the textbook cell undeformed below the Fréedericksz threshold', async () => {
+		// Threshold of a twisted cell (Leslie 1970; Schadt & Helfrich, Appl. Phys. Lett. 18, 127,
+		// 1971): V_th = π·sqrt((K11 + (K33 − 2·K22)·(φ/π)²) / (ε0·Δε)). With the generic fluid's
+		// constants (K11 10, K22 5.5, K33 15 pN, Δε 6) and φ = 90°: V_th = 1.4295 V. Without pretilt
+		// or dopant the director does not move below it, so the transmittance stays at its 0 V value
+		// (the Gooch–Tarry figure); just above it the cell starts to switch.
+		const eps0 = 8.8541878128e-12; // CODATA 2018
+		const kEff = (10 + (15 - 2 * 5.5) / 4) * 1e-12;
+		const vth_V = Math.PI * Math.sqrt(kEff / (eps0 * 6));
+		expect(vth_V).toBeCloseTo(1.4295, 3);
+		const at = async (volts: number) => {
+			const r = await runCli([
+				'cell',
+				'--material',
+				'generic-reflective-tn',
+				'--pretilt-deg',
+				'0',
+				'--d-over-p',
+				'0',
+				'--temperature-c',
+				'25',
+				'--volts',
+				String(volts),
+				'--json'
+			]);
+			expect(r.code, r.stderr).toBe(0);
+			return JSON.parse(r.stdout);
+		};
+		// --volts 0 means a saturated pixel, so the unpowered reference is the off-state figure at
+		// a tiny voltage instead.
+		const rest = await at(0.01);
+		const below = await at(0.97 * vth_V);
+		const above = await at(1.03 * vth_V);
+		expect(Math.abs(below.transmittance - rest.transmittance)).toBeLessThan(1e-6);
+		expect(Math.abs(above.transmittance - rest.transmittance)).toBeGreaterThan(1e-5);
+		// The 10 % optical point lies above the threshold, never below it.
+		expect(rest.v10_V).toBeGreaterThan(vth_V);
+	});
+
+	it('leaves only the front-surface reflection in a saturated pixel between ideal polarizers', async () => {
+		// A fully switched (homeotropic) positive cell between crossed ideal polarizers returns no
+		// light from the reflector; what remains is the glass front surface, a fraction R_s of the
+		// illuminant (Y = 100·R_s). 0.04 is the normal-incidence Fresnel reflectance of glass,
+		// ((n − 1)/(n + 1))² with n = 1.5 (Born & Wolf, Principles of Optics, §1.5).
+		for (const rs of [0, 0.04, 0.1]) {
+			const r = await runCli([
+				'cell',
+				'--ideal-polarizers',
+				'--front-reflectance',
+				String(rs),
+				'--volts',
+				'0',
+				'--json'
+			]);
+			expect(r.code, r.stderr).toBe(0);
+			const out = JSON.parse(r.stdout);
+			expect(Math.abs(out.on.Y - 100 * rs), `R_s = ${rs}`).toBeLessThan(2e-3);
+			expect(out.off.Y).toBeGreaterThan(out.on.Y + 10);
+		}
 	});
 
 	it('names the parameter on bad input', async () => {

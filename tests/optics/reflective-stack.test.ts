@@ -24,6 +24,7 @@ import {
 } from '../../src/lib/core/optics/stack-spec';
 import { fixtureIndicesAt, fixtureOnProfile, goochTarryLeak, visibleGrid_nm } from './fixtures';
 import { checkAgainstReference } from './reference-check';
+import { propertySeed } from '../helpers/seed';
 
 const QUARTER_TURN_rad = Math.PI / 2;
 const DN = 0.1;
@@ -322,6 +323,61 @@ describe('reflective stack', () => {
 				}
 			),
 			{ numRuns: 200 }
+		);
+	});
+
+	it('property: returned light scales with the reflector, mixes with depolarisation, and an ideal front polarizer passes at most half', () => {
+		// Physics, not the code: with one bounce (multiple reflections neglected) the light
+		// returned is proportional to the reflector's reflectance ρ; a reflector depolarising a
+		// share δ returns the mix (1 − δ)·R(δ=0) + δ·R(δ=1); and an ideal polarizer passes at most
+		// half of unpolarised light (Malus), which crosses the first surface twice, so
+		// R − R_s ≤ (1 − R_s)²·ρ/2 (Born & Wolf, Principles of Optics, §1.5 and §14.4).
+		const wavelengths_nm = Float64Array.of(430, 550, 660);
+		const run = (options: {
+			front_deg: number;
+			rear_deg: number;
+			rho: number;
+			delta: number;
+			rs: number;
+			nodes: number;
+		}) =>
+			stackSpectra({
+				profile: fixtureOnProfile(options.nodes),
+				indicesAt: fixtureIndicesAt,
+				wavelengths_nm,
+				stack: {
+					front: { polarizer: IDEAL_POLARIZER, axis_deg: options.front_deg },
+					rear: { polarizer: IDEAL_POLARIZER, axis_deg: options.rear_deg },
+					reflector: {
+						kind: 'brushedMetal',
+						reflectance: options.rho,
+						depolarizedFraction: options.delta
+					},
+					frontSurfaceReflectance: options.rs
+				}
+			}).reflectance;
+		fc.assert(
+			fc.property(
+				fc.double({ min: 0, max: 360, noNaN: true }),
+				fc.double({ min: 0, max: 360, noNaN: true }),
+				fc.double({ min: 0, max: 1, noNaN: true }),
+				fc.double({ min: 0, max: 1, noNaN: true }),
+				fc.double({ min: 0, max: 0.2, noNaN: true }),
+				fc.integer({ min: 2, max: 30 }),
+				(front_deg, rear_deg, rho, delta, rs, nodes) => {
+					const base = { front_deg, rear_deg, rs, nodes };
+					const r = run({ ...base, rho, delta });
+					const full = run({ ...base, rho: 1, delta });
+					const kept = run({ ...base, rho, delta: 0 });
+					const mixed = run({ ...base, rho, delta: 1 });
+					for (let i = 0; i < wavelengths_nm.length; i++) {
+						expect(r[i] - rs).toBeCloseTo(rho * (full[i] - rs), 12);
+						expect(r[i]).toBeCloseTo((1 - delta) * kept[i] + delta * mixed[i], 12);
+						expect(r[i] - rs).toBeLessThanOrEqual(((1 - rs) ** 2 * rho) / 2 + 1e-12);
+					}
+				}
+			),
+			{ numRuns: 150, seed: propertySeed('reflective stack scaling') }
 		);
 	});
 
