@@ -1,23 +1,32 @@
-/** Reads and validates a design file for a command; bad input becomes a CliError (exit 2). */
+/**
+ * The command line's one way to read a design file: bytes through the shared reader (the same
+ * encodings, size limit and verdict as the app), file-system failures in words. Bad input
+ * becomes a CliError (exit 2) with every invalid path listed.
+ */
 import type { Design } from '../lib/core/design/schema';
-import { parseDesignText } from '../lib/core/design/parse-design';
+import { readDesignBytes } from '../lib/core/design/read-design-bytes';
 import { formatIssue } from '../lib/core/design/issues';
 import { CliError, EXIT } from './cli-error';
+import { fileErrorText } from './file-error-text';
 import type { CliIo } from './io';
 
-export async function readDesign(io: CliIo, path: string): Promise<Design> {
-	let text: string;
+async function readBytes(io: CliIo, path: string): Promise<Uint8Array> {
 	try {
-		text = await io.readFile(path);
+		return io.readBytes
+			? await io.readBytes(path)
+			: new TextEncoder().encode(await io.readFile(path));
 	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
+		throw new CliError(`cannot read ${path}: ${fileErrorText(error)}`);
 	}
-	const parsed = parseDesignText(text);
-	if (!parsed.ok)
-		throw new CliError(
-			`${path}: invalid design\n` + parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n')
-		);
+}
+
+function invalidText(path: string, issues: Parameters<typeof formatIssue>[0][]): string {
+	return `${path}: invalid design\n` + issues.map((i) => `  ${formatIssue(i)}`).join('\n');
+}
+
+export async function readDesign(io: CliIo, path: string): Promise<Design> {
+	const parsed = readDesignBytes(await readBytes(io, path));
+	if (!parsed.ok) throw new CliError(invalidText(path, parsed.issues));
 	return parsed.design;
 }
 
@@ -26,17 +35,8 @@ export async function readDesignFile(
 	path: string,
 	io: CliIo
 ): Promise<{ ok: true; design: Design } | { ok: false; exitCode: number }> {
-	let text: string;
-	try {
-		text = await io.readFile(path);
-	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
-	}
-	const parsed = parseDesignText(text);
+	const parsed = readDesignBytes(await readBytes(io, path));
 	if (parsed.ok) return { ok: true, design: parsed.design };
-	io.err(
-		`${path}: invalid design\n` + parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') + '\n'
-	);
+	io.err(invalidText(path, parsed.issues) + '\n');
 	return { ok: false, exitCode: EXIT.badInput };
 }

@@ -1,8 +1,7 @@
 /** `sunglyph check <design.json>`: validation, wiring and the drive verdict of a design file. */
 import { findingLines } from '../finding-text';
 import { parseArgs } from 'node:util';
-import { readDesignBytes } from '../../lib/core/design/read-design-bytes';
-import { formatIssue } from '../../lib/core/design/issues';
+import { readDesignFile } from '../read-design';
 import { analyzeDesignWithCell } from '../../lib/core/analyze-design';
 import { opticsSummary, opticsLines } from '../optics-report';
 import { CliError, EXIT } from '../cli-error';
@@ -10,7 +9,6 @@ import type { CliIo } from '../io';
 import { driveReportLines } from '../drive-report-text';
 import { legibilityLines } from '../legibility-text';
 import { loadSummaryLines } from '../load-report-text';
-import { fileErrorText } from '../file-error-text';
 import { helpRows } from '../help-table';
 
 export const CAUTION =
@@ -44,24 +42,8 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 	}
 	if (positionals.length !== 1)
 		throw new CliError('expected exactly one design file (see sunglyph check --help)');
-	const path = positionals[0];
-	let bytes: Uint8Array;
-	try {
-		bytes = io.readBytes
-			? await io.readBytes(path)
-			: new TextEncoder().encode(await io.readFile(path));
-	} catch (error) {
-		throw new CliError(`cannot read ${path}: ${fileErrorText(error)}`);
-	}
-	const parsed = readDesignBytes(bytes);
-	if (!parsed.ok) {
-		io.err(
-			`${path}: invalid design\n` +
-				parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n') +
-				'\n'
-		);
-		return EXIT.badInput;
-	}
+	const parsed = await readDesignFile(positionals[0], io);
+	if (!parsed.ok) return parsed.exitCode;
 	const report = analyzeDesignWithCell(parsed.design);
 	if (values.json) {
 		io.out(JSON.stringify({ ...report, optics: opticsSummary(report) }, null, 2) + '\n');

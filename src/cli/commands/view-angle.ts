@@ -1,11 +1,10 @@
 /** `sunglyph view-angle <design.json>`: contrast over viewing directions and the best direction. */
 import { parseArgs } from 'node:util';
-import { parseDesignText } from '../../lib/core/design/parse-design';
-import { formatIssue } from '../../lib/core/design/issues';
 import { overallSeverity } from '../../lib/core/findings/finding';
 import { viewAngleReport } from '../../lib/core/viewangle/view-angle-report';
 import { CliError, EXIT } from '../cli-error';
 import type { CliIo } from '../io';
+import { readDesign } from '../read-design';
 import { parseNumber } from '../parse-numbers';
 import { findingLines } from '../finding-text';
 import { CAUTION } from './check';
@@ -24,22 +23,6 @@ Exit status: 0 no failed check, 1 a check fails, 2 unreadable or invalid input.
   --temperature-c C     temperature (default 25 °C, clamped to the design's range)
   --json                print the full report as JSON
   -h, --help            show this help`;
-
-async function readDesign(path: string, io: CliIo) {
-	let text: string;
-	try {
-		text = await io.readFile(path);
-	} catch (error) {
-		const reason = error instanceof Error && 'code' in error ? String(error.code) : String(error);
-		throw new CliError(`cannot read ${path}: ${reason}`);
-	}
-	const parsed = parseDesignText(text);
-	if (!parsed.ok)
-		throw new CliError(
-			`${path}: invalid design\n` + parsed.issues.map((i) => `  ${formatIssue(i)}`).join('\n')
-		);
-	return parsed.design;
-}
 
 export async function runViewAngle(args: string[], io: CliIo): Promise<number> {
 	const { values, positionals } = parseArgs({
@@ -72,7 +55,7 @@ export async function runViewAngle(args: string[], io: CliIo): Promise<number> {
 		values['temperature-c'] === undefined
 			? undefined
 			: parseNumber('temperature-c', values['temperature-c']);
-	const design = await readDesign(positionals[0], io);
+	const design = await readDesign(io, positionals[0]);
 	if (temperature_C !== undefined) {
 		const { min_C, max_C } = design.drive.temperature;
 		if (!(temperature_C >= min_C && temperature_C <= max_C))
