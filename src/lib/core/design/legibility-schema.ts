@@ -15,10 +15,18 @@
  */
 import { z } from 'zod';
 import { illuminantByName } from '../color/illuminant-by-name';
+import { SCENARIO_FIELDS, type ScenarioNumberKey } from './scenario-fields';
 
 const finite = () => z.number().refine(Number.isFinite, 'expected a finite number');
 const between = (min: number, max: number, unit: string) =>
 	finite().refine((v) => v >= min && v <= max, `expected ${min} to ${max}${unit}`);
+
+const UNIT_SUFFIX: Record<string, string> = { '°': '°' };
+/** A scenario number checked against its declared range. */
+const scenarioNumber = (key: ScenarioNumberKey) => {
+	const f = SCENARIO_FIELDS[key];
+	return between(f.min, f.max, UNIT_SUFFIX[f.unit] ?? ` ${f.unit}`);
+};
 
 const illuminantName = () =>
 	z
@@ -34,20 +42,19 @@ const illuminantName = () =>
 			}
 		}, 'expected an illuminant the colour core knows (A, D50, D65, D75, E, F2, F11 …)');
 
-/** Adrian's age factor is defined for 23 to 75 years. */
-export const AGE_RANGE_YEARS = { min: 23, max: 75 } as const;
+export { AGE_RANGE_YEARS } from './scenario-fields';
 
 export const scenarioSchema = z.strictObject({
 	name: z.string().min(1, 'expected a name').max(60, 'expected at most 60 characters'),
-	illuminance_lx: between(0.01, 150_000, ' lx'),
+	illuminance_lx: scenarioNumber('illuminance_lx'),
 	illuminant: illuminantName(),
 	/** Luminance of what the front surface mirrors toward the reader. */
-	mirrored_cdm2: between(0, 2e9, ' cd/m²'),
-	distance_mm: between(50, 20_000, ' mm'),
-	viewAngle_deg: between(0, 80, '°'),
-	age_years: between(AGE_RANGE_YEARS.min, AGE_RANGE_YEARS.max, ' years'),
+	mirrored_cdm2: scenarioNumber('mirrored_cdm2'),
+	distance_mm: scenarioNumber('distance_mm'),
+	viewAngle_deg: scenarioNumber('viewAngle_deg'),
+	age_years: scenarioNumber('age_years'),
 	/** Backlight luminance seen through the background, for a transflective reflector at night. */
-	backlight_cdm2: between(0, 10_000, ' cd/m²').optional()
+	backlight_cdm2: scenarioNumber('backlight_cdm2').optional()
 });
 
 export const readingSchema = z.strictObject({
