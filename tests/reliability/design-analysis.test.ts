@@ -57,23 +57,39 @@ describe('design checks in a worker', () => {
 		expect(analysis.busy).toBe(false);
 	});
 
-	it('shows only the latest design, stopping a worker busy with an older one', () => {
+	it('shows only the latest design: edits made while the worker is busy wait, and only the last is sent', () => {
 		analysis.start();
 		analysis.update(named('First'), NO_CELL);
 		vi.advanceTimersByTime(100);
-		const first = workers[0].received[0];
+		expect(workers[0].received).toHaveLength(1);
 		expect(analysis.busy).toBe(true);
 		analysis.update(named('Second'), NO_CELL);
 		vi.advanceTimersByTime(100);
-		expect(workers[0].terminated).toBe(true);
-		const second = workers[1].received[0];
-		// The late answer for the first design is dropped.
-		workers[0].answer(first);
-		expect(analysis.busy).toBe(true);
+		analysis.update(named('Third'), NO_CELL);
+		vi.advanceTimersByTime(100);
+		// Nothing more is sent while the worker is busy.
+		expect(workers[0].received).toHaveLength(1);
+		// The answer for the first design is dropped and the newest waiting design goes next.
+		workers[0].answer(workers[0].received[0]);
 		expect(analysis.report.design.name).toBe(demo.name);
-		workers[1].answer(second);
+		expect(workers[0].received.map((r) => r.design.name)).toEqual(['First', 'Third']);
+		expect(analysis.busy).toBe(true);
+		workers[0].answer(workers[0].received[1]);
 		expect(analysis.busy).toBe(false);
-		expect(analysis.report.design.name).toBe('Second');
+		expect(analysis.report.design.name).toBe('Third');
+		expect(workers).toHaveLength(1);
+	});
+
+	it('replaces a worker that stays busy far too long', () => {
+		analysis.start();
+		analysis.update(named('Stuck'), NO_CELL);
+		vi.advanceTimersByTime(100);
+		vi.advanceTimersByTime(20_000);
+		expect(workers[0].terminated).toBe(true);
+		expect(workers).toHaveLength(2);
+		expect(workers[1].received.map((r) => r.design.name)).toEqual(['Stuck']);
+		workers[1].answer(workers[1].received[0]);
+		expect(analysis.report.design.name).toBe('Stuck');
 	});
 
 	it('computes on the page when the worker cannot run', () => {

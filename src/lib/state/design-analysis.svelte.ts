@@ -1,9 +1,9 @@
 /**
  * Keeps the design report (wiring, drive, rules, load, legibility findings) in step with the
  * design, computed in a worker so a large drawing never stalls editing. Until the worker is
- * started (and on the server) a request is answered on the spot. A request made while the worker
- * is busy with an older one stops that worker and starts a fresh one; an answer for an older
- * request is dropped. Should the worker itself fail to run, the report is computed here instead,
+ * started (and on the server) a request is answered on the spot. The checks take a bounded time
+ * (well under a second), so a request made while the worker is busy waits for it and only the
+ * latest waiting design is sent next; a worker still busy after STUCK_MS is replaced. Should the worker itself fail to run, the report is computed here instead,
  * so the checks are never lost; should the checks themselves throw, `failure` says so and the
  * last report stays (an internal error is never shown as a verdict).
  */
@@ -17,6 +17,7 @@ import type {
 import { createDesignWorker } from '$lib/workers/create-design-worker';
 
 const DEBOUNCE_MS = 40;
+const STUCK_MS = 15_000;
 
 /** The parts of a Worker this class uses, so tests can drive it without a browser. */
 export type DesignWorkerLike = Pick<Worker, 'postMessage' | 'terminate'> & {
@@ -39,6 +40,7 @@ export class DesignAnalysis {
 	#running = 0;
 	#pending: DesignRequest | null = null;
 	#timer: ReturnType<typeof setTimeout> | undefined;
+	#stuckTimer: ReturnType<typeof setTimeout> | undefined;
 
 	constructor(
 		design: Design,
@@ -55,6 +57,7 @@ export class DesignAnalysis {
 		this.#spawn();
 		return () => {
 			clearTimeout(this.#timer);
+			clearTimeout(this.#stuckTimer);
 			this.#worker?.terminate();
 			this.#worker = null;
 		};
@@ -73,7 +76,7 @@ export class DesignAnalysis {
 		this.busy = true;
 		this.#pending = request;
 		clearTimeout(this.#timer);
-		this.#timer = setTimeout(() => this.#send(request), DEBOUNCE_MS);
+		this.#timer = setTimeout(() => this.#pump(), DEBOUNCE_MS);
 	}
 
 	#spawn() {
@@ -86,14 +89,22 @@ export class DesignAnalysis {
 		this.#worker = worker;
 	}
 
-	#send(request: DesignRequest) {
-		if (!this.#worker || request.id !== this.#latest) return;
-		if (this.#running !== 0) {
-			this.#worker.terminate();
-			this.#spawn();
-		}
+	/** Sends the latest waiting design when the worker is free. */
+	#pump() {
+		const request = this.#pending;
+		if (!this.#worker || this.#running !== 0 || !request || request.id !== this.#latest) return;
 		this.#running = request.id;
+		clearTimeout(this.#stuckTimer);
+		this.#stuckTimer = setTimeout(() => this.#unstick(request.id), STUCK_MS);
 		this.#worker.postMessage(request);
+	}
+
+	#unstick(id: number) {
+		if (this.#running !== id) return;
+		this.#worker?.terminate();
+		this.#spawn();
+		this.#running = 0;
+		this.#pump();
 	}
 
 	#computeHere(request: DesignRequest) {
@@ -110,6 +121,7 @@ export class DesignAnalysis {
 		this.#worker?.terminate();
 		this.#worker = null;
 		this.#running = 0;
+		clearTimeout(this.#stuckTimer);
 		this.workerError = message;
 		if (this.#pending) this.#computeHere(this.#pending);
 		this.#pending = null;
@@ -117,8 +129,11 @@ export class DesignAnalysis {
 	}
 
 	#receive(message: DesignResponse) {
-		if (message.id !== this.#latest) return;
+		if (message.id !== this.#running) return;
 		this.#running = 0;
+		clearTimeout(this.#stuckTimer);
+		// An answer for a design edited since is dropped; the newest waiting one goes next.
+		if (message.id !== this.#latest) return void this.#pump();
 		this.#pending = null;
 		this.busy = false;
 		if (message.kind === 'result') {
