@@ -138,6 +138,37 @@ describe('distances', () => {
 		});
 	});
 
+	it('minimum gap between bars whose long edges continue one another, at any slant', () => {
+		// Two bars one behind the other along a slanted axis, their long edges on the same lines
+		// (as the upper and lower right bars of a slanted character): the gap is the spacing g
+		// between the facing ends, exactly, by construction (plane geometry). Collinear edges
+		// must never read as crossing however the rounding falls.
+		const g = 0.03;
+		// Each coordinate carries rounding-sized noise (a few units in the last place), as computed
+		// outlines do; the seed is fixed only so that a failure replays.
+		let state = 12345;
+		const noise = (v: number) => {
+			state = (state * 1103515245 + 12345) % 2 ** 31;
+			return v * (1 + ((state / 2 ** 31) * 2 - 1) * 4e-16);
+		};
+		const bar = (from: number, to: number, angle_rad: number) => {
+			const ux = Math.cos(angle_rad);
+			const uy = Math.sin(angle_rad);
+			const at = (s: number, t: number) => ({
+				x: noise(3 + s * ux - t * uy),
+				y: noise(-2 + s * uy + t * ux)
+			});
+			return { outline: [at(from, 0), at(to, 0), at(to, 1.3), at(from, 1.3)], holes: [] };
+		};
+		let worst = 0;
+		for (let k = 0; k <= 4000; k++) {
+			const angle_rad = ((50 + (80 * k) / 4000) * Math.PI) / 180;
+			const gap = minimumGap(bar(0, 11.3, angle_rad), bar(11.3 + g, 22.6, angle_rad));
+			worst = Math.max(worst, Math.abs(gap - g));
+		}
+		expect(worst).toBeLessThan(1e-9);
+	});
+
 	it('minimum gap between shapes: 0 when touching, inside, or overlapping; distance otherwise', () => {
 		const a = { outline: rect(0, 0, 2, 2), holes: [] };
 		expect(minimumGap(a, { outline: rect(2.5, 0, 1, 1), holes: [] })).toBeCloseTo(0.5, 15);

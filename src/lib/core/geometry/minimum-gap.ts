@@ -41,7 +41,14 @@ function pointSegment2(
 const orient = (ax: number, ay: number, bx: number, by: number, cx: number, cy: number) =>
 	(bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
 
-/** Squared distance between segments ab and cd (0 when they cross). */
+/**
+ * Relative size below which an orientation counts as zero: collinear edges (a slanted bar's edge
+ * continuing in the next bar's) give orientations of rounding noise with either sign, which must
+ * not read as a crossing.
+ */
+const COLLINEAR_EPS = 1e-9;
+
+/** Squared distance between segments ab and cd (0 when they properly cross). */
 function segmentSegment2(
 	ax: number,
 	ay: number,
@@ -52,11 +59,14 @@ function segmentSegment2(
 	dx: number,
 	dy: number
 ): number {
+	const eps = COLLINEAR_EPS * Math.hypot(bx - ax, by - ay) * Math.hypot(dx - cx, dy - cy);
 	const d1 = orient(cx, cy, dx, dy, ax, ay);
 	const d2 = orient(cx, cy, dx, dy, bx, by);
 	const d3 = orient(ax, ay, bx, by, cx, cy);
 	const d4 = orient(ax, ay, bx, by, dx, dy);
-	if (d1 * d2 < 0 && d3 * d4 < 0) return 0;
+	const opposite = (p: number, q: number) => (p > eps && q < -eps) || (p < -eps && q > eps);
+	// Touching and collinear overlaps are caught below: an endpoint then lies on the other segment.
+	if (opposite(d1, d2) && opposite(d3, d4)) return 0;
 	return Math.min(
 		pointSegment2(ax, ay, cx, cy, dx, dy),
 		pointSegment2(bx, by, cx, cy, dx, dy),
