@@ -163,8 +163,15 @@ describe('distances', () => {
 		let worst = 0;
 		for (let k = 0; k <= 4000; k++) {
 			const angle_rad = ((50 + (80 * k) / 4000) * Math.PI) / 180;
-			const gap = minimumGap(bar(0, 11.3, angle_rad), bar(11.3 + g, 22.6, angle_rad));
-			worst = Math.max(worst, Math.abs(gap - g));
+			const lower = bar(0, 11.3, angle_rad);
+			const upper = bar(11.3 + g, 22.6, angle_rad);
+			const gap = minimumGap(lower, upper);
+			// The two long edges on one line: their distance is the same spacing g.
+			const edges = distanceSegmentToSegment(
+				{ a: lower.outline[0], b: lower.outline[1] },
+				{ a: upper.outline[0], b: upper.outline[1] }
+			);
+			worst = Math.max(worst, Math.abs(gap - g), Math.abs(edges - g));
 		}
 		expect(worst).toBeLessThan(1e-9);
 	});

@@ -34,12 +34,15 @@ export const distancePointToSegment = (p: XY, segment: Segment2): number =>
 
 const orient = (a: XY, b: XY, c: XY) => (b.x - a.x) * (c.y - a.y) - (b.y - a.y) * (c.x - a.x);
 
+/** Proper crossing; orientations within rounding noise of zero (collinear edges) do not count. */
 export function segmentsCross(s: Segment2, t: Segment2): boolean {
-	const d1 = orient(t.a, t.b, s.a);
-	const d2 = orient(t.a, t.b, s.b);
-	const d3 = orient(s.a, s.b, t.a);
-	const d4 = orient(s.a, s.b, t.b);
-	return ((d1 > 0 && d2 < 0) || (d1 < 0 && d2 > 0)) && ((d3 > 0 && d4 < 0) || (d3 < 0 && d4 > 0));
+	const eps =
+		1e-9 * Math.hypot(s.b.x - s.a.x, s.b.y - s.a.y) * Math.hypot(t.b.x - t.a.x, t.b.y - t.a.y);
+	const opposite = (p: number, q: number) => (p > eps && q < -eps) || (p < -eps && q > eps);
+	return (
+		opposite(orient(t.a, t.b, s.a), orient(t.a, t.b, s.b)) &&
+		opposite(orient(s.a, s.b, t.a), orient(s.a, s.b, t.b))
+	);
 }
 
 export function distanceSegmentToSegment(s: Segment2, t: Segment2): number {
