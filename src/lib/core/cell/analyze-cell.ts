@@ -15,6 +15,7 @@ import { electroOpticCurve, type ElectroOpticCurve } from './electro-optic-curve
 import { contrastRatio, pixelAppearance, type PixelAppearance } from './pixel-appearance';
 import { geometryOfCell, materialOfCell } from './resolve-cell';
 import { responseTemperatures } from './response-temperatures';
+import type { ObliqueView } from '../legibility/oblique-views';
 
 export const ROOM_C = 25;
 
@@ -46,6 +47,8 @@ export interface TemperatureStates {
 	background: PixelAppearance;
 	off: PixelAppearance;
 	on: PixelAppearance;
+	/** The states from the legibility scenarios' oblique directions, when computed ahead. */
+	views?: ObliqueView[];
 }
 
 function checkedTemperatures(min_C: number, max_C: number): number[] {

@@ -33,6 +33,8 @@ export interface ViewState {
 
 export interface SeenColor extends ReflectanceColor {
 	reflectance: Float64Array;
+	/** The front surface's reflectance R_s(θ) in this direction, 0…1 (part of `reflectance`). */
+	surface: number;
 }
 
 export interface CellView {
@@ -41,7 +43,7 @@ export interface CellView {
 	seen(state: ViewState, direction: ViewDirection): SeenColor;
 }
 
-export function twistSign(design: Design): 1 | -1 {
+export function twistSign(design: Pick<Design, 'orientation'>): 1 | -1 {
 	return design.orientation.twistSense === 'left-handed' ? -1 : 1;
 }
 
@@ -89,9 +91,9 @@ export function createCellView(options: {
 			return { voltage_V, profile, prepared: evaluator.prepare(slabs) };
 		},
 		seen(state, direction) {
-			const { reflectance } = evaluator.at(state.prepared, direction);
+			const { reflectance, surface } = evaluator.at(state.prepared, direction);
 			const color = reflectanceToColor({ reflectance, grid: CELL_GRID, illuminant, observer });
-			return { ...color, reflectance };
+			return { ...color, reflectance, surface };
 		}
 	};
 }
