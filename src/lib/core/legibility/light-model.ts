@@ -15,7 +15,10 @@ import { readingAzimuth_deg } from '../viewangle/reading-azimuth';
 export const OBLIQUE_FROM_deg = 0.5;
 
 export type LightModel =
-	{ kind: 'normal incidence' } | { kind: 'oblique'; polar_deg: number; azimuth_deg: number };
+	| { kind: 'normal incidence'; label: string }
+	| { kind: 'oblique'; polar_deg: number; azimuth_deg: number; label: string };
+
+export const NORMAL_INCIDENCE: LightModel = { kind: 'normal incidence', label: 'normal incidence' };
 
 export function lightModelOf(options: {
 	design: Pick<Design, 'cell' | 'orientation'>;
@@ -24,16 +27,18 @@ export function lightModelOf(options: {
 	azimuth_deg?: number;
 }): LightModel {
 	const polar_deg = options.scenario.viewAngle_deg;
-	if (!(polar_deg > OBLIQUE_FROM_deg)) return { kind: 'normal incidence' };
+	if (!(polar_deg > OBLIQUE_FROM_deg)) return NORMAL_INCIDENCE;
 	const azimuth_deg = options.azimuth_deg ?? readingAzimuth_deg(options.design);
-	return { kind: 'oblique', polar_deg, azimuth_deg };
+	return { kind: 'oblique', polar_deg, azimuth_deg, label: obliqueLabel(polar_deg, azimuth_deg) };
 }
 
-/** "normal incidence" or "oblique, θ = 15° from 6 o'clock", as every output names the model. */
+/** "oblique, θ = 15° from 6 o'clock", as every output names the model. */
+function obliqueLabel(polar_deg: number, azimuth_deg: number): string {
+	const polar = Number.isInteger(polar_deg) ? String(polar_deg) : polar_deg.toFixed(1);
+	return `oblique, θ = ${polar}° from ${clockHour(azimuth_deg)} o'clock`;
+}
+
+/** "normal incidence" or "oblique, θ = 15° from 6 o'clock". */
 export function lightModelLabel(model: LightModel): string {
-	if (model.kind === 'normal incidence') return 'normal incidence';
-	const polar = Number.isInteger(model.polar_deg)
-		? String(model.polar_deg)
-		: model.polar_deg.toFixed(1);
-	return `oblique, θ = ${polar}° from ${clockHour(model.azimuth_deg)} o'clock`;
+	return model.label;
 }

@@ -26,7 +26,7 @@ import { VISIBLE_5NM_GRID } from '../color/spectrum';
 import type { ObserverName } from '../color/observers';
 import type { Lab, Xyz } from '../color/types';
 import type { Scenario } from '../design/legibility-schema';
-import type { LightModel } from './light-model';
+import { NORMAL_INCIDENCE, type LightModel } from './light-model';
 
 export const STATE_NAMES = ['background', 'off', 'on'] as const;
 export type StateName = (typeof STATE_NAMES)[number];
@@ -125,6 +125,6 @@ export function scenarioLight(options: {
 		veil_cdm2,
 		adaptedWhite_cdm2,
 		white,
-		model: options.model ?? { kind: 'normal incidence' }
+		model: options.model ?? NORMAL_INCIDENCE
 	};
 }
