@@ -16,6 +16,7 @@ import { contrastRatio, pixelAppearance, type PixelAppearance } from './pixel-ap
 import { geometryOfCell, materialOfCell } from './resolve-cell';
 import { responseTemperatures } from './response-temperatures';
 import type { ObliqueView } from '../legibility/oblique-views';
+import { rememberStateProfiles } from './state-profiles';
 
 export const ROOM_C = 25;
 
@@ -91,12 +92,19 @@ export function analyzeCell(
 		);
 		const zero = optics.stateAt(0);
 		const offState = rms.off_V > 0 ? optics.stateAt(rms.off_V, zero.solution) : zero;
-		statesByTemperature.push({
+		const onState = optics.stateAt(rms.on_V, offState.solution);
+		const states: TemperatureStates = {
 			temperature_C,
 			background: pixelAppearance(zero, lighting.illuminance_lx),
 			off: pixelAppearance(offState, lighting.illuminance_lx),
-			on: pixelAppearance(optics.stateAt(rms.on_V, offState.solution), lighting.illuminance_lx)
+			on: pixelAppearance(onState, lighting.illuminance_lx)
+		};
+		rememberStateProfiles(states, {
+			background: zero.solution,
+			off: offState.solution,
+			on: onState.solution
 		});
+		statesByTemperature.push(states);
 		onProgress?.(index + 1, temperatures_C.length);
 	}
 	const roomStates = statesByTemperature.find((s) => s.temperature_C === room_C);

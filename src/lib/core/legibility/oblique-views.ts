@@ -14,15 +14,17 @@
  * mirrored path, and it slices the director into midpoint retarders.) The front surface's
  * R_s(θ) from the Fresnel equations is carried along so the caller can count it as veil.
  *
- * Cost: three director solves and three hemisphere averages per temperature and cell, then about
- * a millisecond per direction; the prepared states are kept for the last few cells (a pure
- * cache: same inputs, same numbers).
+ * Cost: three hemisphere averages per temperature and cell (and three director solves when the
+ * cell report's own profiles are not at hand, state-profiles.ts), then about a millisecond per
+ * direction; the prepared states are kept for the last few cells (a pure cache: same inputs,
+ * same numbers).
  */
 import type { Design } from '../design/schema';
 import type { CellReport, TemperatureStates } from '../cell/analyze-cell';
 import { createCellView, type CellView, type ViewState } from '../viewangle/cell-view';
 import type { ViewDirection } from '../optics/oblique/view-direction';
 import { lightModelOf } from './light-model';
+import { stateProfilesOf } from '../cell/state-profiles';
 
 export const VIEW_STATE_NAMES = ['background', 'off', 'on'] as const;
 type StateName = (typeof VIEW_STATE_NAMES)[number];
@@ -54,9 +56,17 @@ function prepared(design: Design, states: TemperatureStates): Prepared {
 	const hit = cache.get(key);
 	if (hit) return hit;
 	const view = createCellView({ design, temperature_C: states.temperature_C });
-	const background = view.stateAt(states.background.voltage_V);
-	const off = view.stateAt(states.off.voltage_V, background.profile);
-	const on = view.stateAt(states.on.voltage_V, off.profile);
+	const solved = stateProfilesOf(states);
+	let background: ViewState, off: ViewState, on: ViewState;
+	if (solved) {
+		background = view.stateOf(states.background.voltage_V, solved.background);
+		off = view.stateOf(states.off.voltage_V, solved.off);
+		on = view.stateOf(states.on.voltage_V, solved.on);
+	} else {
+		background = view.stateAt(states.background.voltage_V);
+		off = view.stateAt(states.off.voltage_V, background.profile);
+		on = view.stateAt(states.on.voltage_V, off.profile);
+	}
 	const along = { polar_deg: 0, azimuth_deg: 0 };
 	const made: Prepared = {
 		view,

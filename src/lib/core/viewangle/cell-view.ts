@@ -40,6 +40,8 @@ export interface SeenColor extends ReflectanceColor {
 export interface CellView {
 	temperature_C: number;
 	stateAt(voltage_V: number, start?: DirectorProfile): ViewState;
+	/** A state from a director profile solved elsewhere (same cell, temperature and slices). */
+	stateOf(voltage_V: number, profile: DirectorProfile): ViewState;
 	seen(state: ViewState, direction: ViewDirection): SeenColor;
 }
 
@@ -86,7 +88,9 @@ export function createCellView(options: {
 	return {
 		temperature_C,
 		stateAt(voltage_V, start) {
-			const profile = optics.stateAt(voltage_V, start).solution;
+			return this.stateOf(voltage_V, optics.stateAt(voltage_V, start).solution);
+		},
+		stateOf(voltage_V, profile) {
 			const slabs = orientedSlabs({ profile, entrance_deg, sense, subslices: VIEW_SUBSLICES });
 			return { voltage_V, profile, prepared: evaluator.prepare(slabs) };
 		},
