@@ -18,6 +18,7 @@ import { scenarioLight, type ScenarioLight } from './scenario-light';
 import type { Scenario } from '../design/legibility-schema';
 import { lightModelOf, type LightModel } from './light-model';
 import { obliqueViews, type ObliqueView } from './oblique-views';
+import type { ViewDirection } from '../optics/oblique/view-direction';
 
 export type TemperatureEnd = 'cold' | 'room' | 'hot';
 
@@ -40,7 +41,7 @@ export function statesAt(cell: CellReport, end: TemperatureEnd): TemperatureStat
 	return list.find((s) => s.temperature_C === cell.room_C) ?? list[0];
 }
 
-const sameDirection = (v: ObliqueView, m: Extract<LightModel, { kind: 'oblique' }>) =>
+const sameDirection = (v: ViewDirection, m: Extract<LightModel, { kind: 'oblique' }>) =>
 	Math.abs(v.polar_deg - m.polar_deg) < 1e-9 && Math.abs(v.azimuth_deg - m.azimuth_deg) < 1e-9;
 
 /** The oblique views the scenarios need: those the states carry, the rest computed in one go. */
@@ -51,10 +52,11 @@ function viewsFor(options: {
 }): ObliqueView[] {
 	const { design, states } = options;
 	const known = states.views ?? [];
-	const missing = options.models.filter(
-		(m): m is Extract<LightModel, { kind: 'oblique' }> =>
-			m.kind === 'oblique' && !known.some((v) => sameDirection(v, m))
-	);
+	const missing: Extract<LightModel, { kind: 'oblique' }>[] = [];
+	for (const m of options.models) {
+		const have = (v: ViewDirection) => m.kind === 'oblique' && sameDirection(v, m);
+		if (m.kind === 'oblique' && !known.some(have) && !missing.some(have)) missing.push(m);
+	}
 	return [...known, ...obliqueViews({ design, states, directions: missing })];
 }
 

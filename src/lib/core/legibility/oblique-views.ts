@@ -40,6 +40,8 @@ interface Prepared {
 	states: Record<StateName, ViewState>;
 	/** The oblique model along the normal, per state: the anchor. */
 	normal: Record<StateName, Float64Array>;
+	/** Views already worked out, by direction (read-only once made). */
+	byDirection: Map<string, ObliqueView>;
 }
 
 const CACHE_SIZE = 6;
@@ -75,7 +77,8 @@ function prepared(design: Design, states: TemperatureStates): Prepared {
 			background: view.seen(background, along).reflectance,
 			off: view.seen(off, along).reflectance,
 			on: view.seen(on, along).reflectance
-		}
+		},
+		byDirection: new Map()
 	};
 	if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value as string);
 	cache.set(key, made);
@@ -97,6 +100,9 @@ export function obliqueViews(options: {
 	if (directions.length === 0) return [];
 	const p = prepared(design, states);
 	return directions.map(({ polar_deg, azimuth_deg }) => {
+		const key = `${polar_deg}|${azimuth_deg}`;
+		const known = p.byDirection.get(key);
+		if (known) return known;
 		const out = { polar_deg, azimuth_deg, surface: 0 } as ObliqueView;
 		for (const name of VIEW_STATE_NAMES) {
 			const seen = p.view.seen(p.states[name], { polar_deg, azimuth_deg });
@@ -105,6 +111,7 @@ export function obliqueViews(options: {
 			out[name] = Array.from(base, (r, i) => Math.max(0, r + seen.reflectance[i] - anchor[i]));
 			out.surface = seen.surface;
 		}
+		p.byDirection.set(key, out);
 		return out;
 	});
 }
