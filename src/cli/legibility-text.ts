@@ -18,7 +18,8 @@ export function scenarioTableLines(report: LegibilityReport): string[] {
 		'CR',
 		'ΔE00 on',
 		'ΔE00 ghost',
-		'verdict'
+		'verdict',
+		'optical model'
 	];
 	const rows = report.scenarios.map((s) => [
 		s.scenario.name,
@@ -32,7 +33,8 @@ export function scenarioTableLines(report: LegibilityReport): string[] {
 		`${fixed(s.contrastRatio, 2)}:1`,
 		fixed(s.deltaE00On, 1),
 		fixed(s.deltaE00Ghost, 1),
-		s.verdict
+		s.verdict,
+		s.light.model.label
 	]);
 	return formatTable([head, ...rows]).split('\n');
 }
@@ -72,6 +74,8 @@ export function groupTableLines(report: LegibilityReport): string[] {
 export function legibilityLines(report: LegibilityReport): string[] {
 	const lines = [
 		`At ${report.temperature_C} °C. Cell reflectance × E/π plus the front-surface veil R_s × mirrored luminance.`,
+		'Off the normal the cell is seen through the oblique-incidence model (extended Jones), from the',
+		"design's reading direction, and R_s follows the Fresnel equations at that angle.",
 		...scenarioTableLines(report),
 		'',
 		...groupTableLines(report),

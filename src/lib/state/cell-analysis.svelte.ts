@@ -14,8 +14,10 @@ import { createCellWorker } from '$lib/workers/create-cell-worker';
 const DEBOUNCE_MS = 120;
 
 function opticalKey(design: Design): string {
-	const { cell, lighting, drive } = design;
-	return JSON.stringify([cell, lighting, drive]);
+	const { cell, lighting, drive, orientation } = design;
+	// the worker also sees the cell from each scenario's viewing angle
+	const angles = design.legibility.scenarios.map((s) => s.viewAngle_deg);
+	return JSON.stringify([cell, lighting, drive, orientation, angles]);
 }
 
 /** The parts of a Worker this class uses, so tests can drive it without a browser. */

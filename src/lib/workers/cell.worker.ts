@@ -1,5 +1,6 @@
 /** Runs the cell's director, optics and colour model off the main thread. */
 import { analyzeCell } from '$lib/core/cell/analyze-cell';
+import { withScenarioViews } from '$lib/core/legibility/oblique-views';
 import type { CellRequest, CellResponse } from './cell-protocol';
 
 const post = (message: CellResponse) => (self as unknown as Worker).postMessage(message);
@@ -8,8 +9,9 @@ self.onmessage = (event: MessageEvent<CellRequest>) => {
 	const { id, design } = event.data;
 	const start = performance.now();
 	try {
-		const report = analyzeCell(design, (done, total) =>
-			post({ id, kind: 'progress', done, total })
+		const report = withScenarioViews(
+			analyzeCell(design, (done, total) => post({ id, kind: 'progress', done, total })),
+			design
 		);
 		post({ id, kind: 'result', report, elapsed_ms: performance.now() - start });
 	} catch (error) {

@@ -15,6 +15,8 @@ import { electroOpticCurve, type ElectroOpticCurve } from './electro-optic-curve
 import { contrastRatio, pixelAppearance, type PixelAppearance } from './pixel-appearance';
 import { geometryOfCell, materialOfCell } from './resolve-cell';
 import { responseTemperatures } from './response-temperatures';
+import type { ObliqueView } from '../legibility/oblique-views';
+import { rememberStateProfiles } from './state-profiles';
 
 export const ROOM_C = 25;
 
@@ -46,6 +48,8 @@ export interface TemperatureStates {
 	background: PixelAppearance;
 	off: PixelAppearance;
 	on: PixelAppearance;
+	/** The states from the legibility scenarios' oblique directions, when computed ahead. */
+	views?: ObliqueView[];
 }
 
 function checkedTemperatures(min_C: number, max_C: number): number[] {
@@ -88,12 +92,19 @@ export function analyzeCell(
 		);
 		const zero = optics.stateAt(0);
 		const offState = rms.off_V > 0 ? optics.stateAt(rms.off_V, zero.solution) : zero;
-		statesByTemperature.push({
+		const onState = optics.stateAt(rms.on_V, offState.solution);
+		const states: TemperatureStates = {
 			temperature_C,
 			background: pixelAppearance(zero, lighting.illuminance_lx),
 			off: pixelAppearance(offState, lighting.illuminance_lx),
-			on: pixelAppearance(optics.stateAt(rms.on_V, offState.solution), lighting.illuminance_lx)
+			on: pixelAppearance(onState, lighting.illuminance_lx)
+		};
+		rememberStateProfiles(states, {
+			background: zero.solution,
+			off: offState.solution,
+			on: onState.solution
 		});
+		statesByTemperature.push(states);
 		onProgress?.(index + 1, temperatures_C.length);
 	}
 	const roomStates = statesByTemperature.find((s) => s.temperature_C === room_C);

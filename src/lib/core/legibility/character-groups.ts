@@ -5,13 +5,29 @@
  * Groups are ordered left to right, then top to bottom, as a reading is laid onto them.
  */
 import type { Design } from '../design/schema';
-import { runGenerator } from '../glyphs/generator-registry';
 import type { SegmentCount } from '../glyphs/segment-charsets';
+import type { GeneratedGroup } from '../glyphs/glyph-types';
+import { generateSevenSegment } from '../glyphs/seven-segment';
+import { generateStarburst } from '../glyphs/starburst-segments';
 
-const SEGMENT_COUNT: Readonly<Record<string, SegmentCount>> = {
-	'seven-segment': 7,
-	'fourteen-segment': 14,
-	'sixteen-segment': 16
+type StarburstParams = Parameters<typeof generateStarburst>[0];
+
+/** The segmented-character generators only (the icon generators and their geometry kernel stay unloaded). */
+const SEGMENT_GENERATORS: Readonly<
+	Record<string, { count: SegmentCount; run: (params: unknown) => GeneratedGroup }>
+> = {
+	'seven-segment': {
+		count: 7,
+		run: (p) => generateSevenSegment(p as Parameters<typeof generateSevenSegment>[0])
+	},
+	'fourteen-segment': {
+		count: 14,
+		run: (p) => generateStarburst(p as StarburstParams, { count: 14 })
+	},
+	'sixteen-segment': {
+		count: 16,
+		run: (p) => generateStarburst(p as StarburstParams, { count: 16 })
+	}
 };
 
 export interface CharacterGroup {
@@ -32,12 +48,13 @@ export function characterGroups(design: Design): CharacterGroup[] {
 	for (const group of design.groups) {
 		const generator = group.generator;
 		if (!generator) continue;
-		const segmentCount = SEGMENT_COUNT[generator.kind];
+		const segmented = SEGMENT_GENERATORS[generator.kind];
 		const { height_mm, stroke_mm } = generator.params;
-		if (!segmentCount || typeof height_mm !== 'number' || typeof stroke_mm !== 'number') continue;
+		if (!segmented || typeof height_mm !== 'number' || typeof stroke_mm !== 'number') continue;
+		const segmentCount = segmented.count;
 		const segmentIds: Record<string, string> = {};
 		try {
-			const parts = runGenerator(generator.kind, generator.params).parts;
+			const parts = segmented.run(generator.params).parts;
 			parts.forEach((part, i) => {
 				if (i < group.members.length && part.key) segmentIds[part.key] = group.members[i];
 			});

@@ -34,7 +34,8 @@ function logSpace(min: number, max: number, count: number): number[] {
 export function legibilityMap(options: {
 	scenario: Scenario;
 	light: ScenarioLight;
-	frontSurfaceReflectance: number;
+	/** R_s to count the veil with; default the light's own (at the scenario's viewing angle). */
+	frontSurfaceReflectance?: number;
 	groups: readonly CharacterGroup[];
 	settings: Pick<LegibilitySettings, 'readableVL'>;
 	columns?: number;
@@ -52,7 +53,9 @@ export function legibilityMap(options: {
 	const readable = new Uint8Array(columns * rows);
 	if (!smallest) return { illuminances_lx, distances_mm, visibilityLevel, readable, group: '' };
 	const veilPerLux =
-		(options.frontSurfaceReflectance * scenario.mirrored_cdm2) / scenario.illuminance_lx;
+		options.frontSurfaceReflectance === undefined
+			? light.veil_cdm2 / scenario.illuminance_lx
+			: (options.frontSurfaceReflectance * scenario.mirrored_cdm2) / scenario.illuminance_lx;
 	const at = (name: 'background' | 'off' | 'on', e: number) =>
 		(light.diffuse[name] * e) / Math.PI + veilPerLux * e + light.backlit_cdm2[name];
 	for (let c = 0; c < columns; c++) {

@@ -2,7 +2,8 @@
  * The light a reader gets from the three pixel states (background, off, on) in one scenario:
  * the optics per scenario behind one function of the viewing angle.
  *
- * Model (normal incidence; a later oblique-incidence model plugs in here, keyed on the angle):
+ * Model (the spectra come from the normal- or the oblique-incidence model, light-model.ts; the
+ * caller passes the front surface's reflectance at the scenario's angle):
  * - the cell's diffuse part: its reflectance factor minus the flat first-surface reflection R_s,
  *   lit by the scenario's illuminance E: L = ρ·E/π (Lambertian; CIE 15, any radiometry text);
  * - the front-surface veil: L_veil = R_s·L_mirrored, added to every state, of the illuminant's
@@ -25,6 +26,7 @@ import { VISIBLE_5NM_GRID } from '../color/spectrum';
 import type { ObserverName } from '../color/observers';
 import type { Lab, Xyz } from '../color/types';
 import type { Scenario } from '../design/legibility-schema';
+import { NORMAL_INCIDENCE, type LightModel } from './light-model';
 
 export const STATE_NAMES = ['background', 'off', 'on'] as const;
 export type StateName = (typeof STATE_NAMES)[number];
@@ -51,15 +53,19 @@ export interface ScenarioLight extends Record<StateName, LitState> {
 	veil_cdm2: number;
 	adaptedWhite_cdm2: number;
 	white: Xyz;
+	/** The optical model the spectra came from. */
+	model: LightModel;
 }
 
 export function scenarioLight(options: {
 	spectra: StateSpectra;
 	frontSurfaceReflectance: number;
 	scenario: Scenario;
-	/** Off the display normal; the normal-incidence model uses it for nothing yet. */
+	/** Off the display normal, deg: sets the reading geometry; the spectra already include it. */
 	viewAngle_deg: number;
 	observer: ObserverName;
+	/** Which model gave the spectra; default normal incidence. */
+	model?: LightModel;
 }): ScenarioLight {
 	const { spectra, scenario } = options;
 	const rs = options.frontSurfaceReflectance;
@@ -118,6 +124,7 @@ export function scenarioLight(options: {
 		backlit_cdm2,
 		veil_cdm2,
 		adaptedWhite_cdm2,
-		white
+		white,
+		model: options.model ?? NORMAL_INCIDENCE
 	};
 }

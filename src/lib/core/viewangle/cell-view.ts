@@ -33,15 +33,19 @@ export interface ViewState {
 
 export interface SeenColor extends ReflectanceColor {
 	reflectance: Float64Array;
+	/** The front surface's reflectance R_s(θ) in this direction, 0…1 (part of `reflectance`). */
+	surface: number;
 }
 
 export interface CellView {
 	temperature_C: number;
 	stateAt(voltage_V: number, start?: DirectorProfile): ViewState;
+	/** A state from a director profile solved elsewhere (same cell, temperature and slices). */
+	stateOf(voltage_V: number, profile: DirectorProfile): ViewState;
 	seen(state: ViewState, direction: ViewDirection): SeenColor;
 }
 
-export function twistSign(design: Design): 1 | -1 {
+export function twistSign(design: Pick<Design, 'orientation'>): 1 | -1 {
 	return design.orientation.twistSense === 'left-handed' ? -1 : 1;
 }
 
@@ -84,14 +88,16 @@ export function createCellView(options: {
 	return {
 		temperature_C,
 		stateAt(voltage_V, start) {
-			const profile = optics.stateAt(voltage_V, start).solution;
+			return this.stateOf(voltage_V, optics.stateAt(voltage_V, start).solution);
+		},
+		stateOf(voltage_V, profile) {
 			const slabs = orientedSlabs({ profile, entrance_deg, sense, subslices: VIEW_SUBSLICES });
 			return { voltage_V, profile, prepared: evaluator.prepare(slabs) };
 		},
 		seen(state, direction) {
-			const { reflectance } = evaluator.at(state.prepared, direction);
+			const { reflectance, surface } = evaluator.at(state.prepared, direction);
 			const color = reflectanceToColor({ reflectance, grid: CELL_GRID, illuminant, observer });
-			return { ...color, reflectance };
+			return { ...color, reflectance, surface };
 		}
 	};
 }

@@ -15,6 +15,7 @@ import { commonColour } from '../common-colours';
 import { escapeHtml, fixed, htmlTable } from './html-text';
 import { windowPlotSvg } from './window-plot-svg';
 import { REPORT_CSS } from './report-css';
+import { legibilityModelHtml } from './legibility-model-html';
 
 export type PaperSize = 'a4' | 'letter';
 
@@ -65,6 +66,9 @@ export function designReportHtml(options: {
 		section('Drive', driveSection(design, report)),
 		section('Cell and optics', cellSection(report)),
 		section('Findings', findingsTable(findings, byName)),
+		...(report.legibility
+			? [section('Legibility: optics per scenario', legibilityModelHtml(report.legibility))]
+			: []),
 		...(options.sections ?? []).map((s) => section(s.title, s.html)),
 		section(
 			'Model limits and cautions',
