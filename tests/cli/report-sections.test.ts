@@ -14,6 +14,7 @@ import { serializeDesign } from '../../src/lib/core/design/parse-design';
 import type { Design } from '../../src/lib/core/design/schema';
 import { checkGlass } from '../../src/lib/core/glass/check-glass';
 import { findChromium } from '../../src/cli/print-pdf';
+import { DEFAULT_LOAD_SETTINGS } from '../../src/lib/core/load/load-settings';
 import { runCli } from './run-cli';
 
 const demo = demoDesign();
@@ -24,7 +25,7 @@ const failing: Design = {
 	drive: { ...demo.drive, amplitude_V: 3, frameRate_Hz: 10 },
 	electrodes: demo.electrodes.map((e, i) => (i < 2 ? { ...e, common: null } : e)),
 	glassArt: { ...demo.glassArt, ledge: { ...demo.glassArt.ledge, depth_mm: 1.5 } },
-	load: { battery_mAh: 220, budget_uA: 1 }
+	load: { ...DEFAULT_LOAD_SETTINGS, battery_mAh: 220, budget_uA: 1 }
 };
 /** A single-compound cyanobiphenyl clears near 35 °C: nematic nowhere in 36–60 °C. */
 const clearsBelowRange: Design = {
