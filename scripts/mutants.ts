@@ -206,5 +206,17 @@ export const MUTANTS: readonly Mutant[] = [
 		file: 'src/lib/core/load/waveform-energy.ts',
 		edits: [['if (a) kOn += p * 0.5 * dv * dv;', 'if (a) kOn += p * dv * dv;']],
 		tests: LOAD
+	},
+	{
+		id: 'fluid limits: a fluid clearing at the hottest temperature passes',
+		file: 'src/lib/core/cell/fluid-limits.ts',
+		edits: [['if (max_C < clearing_C) return [];', 'if (max_C <= clearing_C) return [];']],
+		tests: ['tests/cell/fluid-limits.test.ts']
+	},
+	{
+		id: 'fluid limits: the clearing point itself counted as nematic',
+		file: 'src/lib/core/cell/fluid-limits.ts',
+		edits: [['(t) => t < options.clearing_C', '(t) => t <= options.clearing_C']],
+		tests: ['tests/cell/fluid-limits.test.ts']
 	}
 ];

@@ -3,6 +3,7 @@ import { analyzeDesignWithCell } from '../../src/lib/core/analyze-design';
 import { demoDesign } from '../../src/lib/core/design/demo';
 import type { Design } from '../../src/lib/core/design/schema';
 import { isKnownFindingCode } from '../../src/lib/core/findings/codes';
+import { presetById } from '../../src/lib/core/lc/presets';
 
 const demo = demoDesign();
 
@@ -56,6 +57,18 @@ describe('fluid limits elsewhere', () => {
 	it('says nothing when the fluid clears above the range', () => {
 		const report = analyzeDesignWithCell(demo);
 		expect(report.opticsFindings.some((f) => f.code === 'optics.fluid-clears')).toBe(false);
+	});
+
+	it('fails a fluid that clears exactly at the hottest temperature, and keeps the rest', () => {
+		// At the clearing point itself the fluid is isotropic (the nematic–isotropic transition).
+		const fluid = presetById('generic-reflective-tn')!;
+		const atEdge: Design = {
+			...demo,
+			cell: { ...demo.cell, material: { custom: { ...fluid, clearing_C: 40 } } }
+		};
+		const report = analyzeDesignWithCell(atEdge);
+		expect(report.opticsFindings.map((f) => f.code)).toContain('optics.fluid-clears');
+		expect(report.cell?.temperatures_C).toEqual([0, 25]);
 	});
 
 	it('still checks wiring, rules and load when no temperature is nematic', () => {
