@@ -112,6 +112,18 @@ for (const size of SIZES) {
 				expect(await cutSelects(page), `drop-downs on ${tab}`).toEqual([]);
 				expect(await cutLabels(page), `labels on ${tab}`).toEqual([]);
 			}
+			// The properties of a selected electrode and the digits dialog, with their drop-downs.
+			await expect(page.locator('[data-testid="editor-canvas"][data-ready="true"]')).toHaveCount(1);
+			await page.locator('[data-electrode]').first().click({ force: true });
+			// Narrow windows fold the side panels; unfold them to see the properties.
+			if (await page.getByTestId('side-unfold').isVisible())
+				await page.getByTestId('side-unfold').click();
+			await expect(page.getByTestId('prop-common')).toBeVisible();
+			await page.keyboard.press('d');
+			await expect(page.getByTestId('generator-dialog')).toBeVisible();
+			await page.getByTestId('param-mode').selectOption('legend');
+			expect(await cutSelects(page), 'drop-downs of the editor').toEqual([]);
+			expect(await cutLabels(page), 'labels of the editor').toEqual([]);
 		});
 
 		test('the electro-optic plot labels V_off and V_on clear of its curves', async ({ page }) => {
