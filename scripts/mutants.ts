@@ -225,5 +225,17 @@ export const MUTANTS: readonly Mutant[] = [
 			['ws.k22 = options.k22_N / options.k11_N;', 'ws.k22 = (0.5 * options.k22_N) / options.k11_N;']
 		],
 		tests: ['tests/cell/cell-cli.test.ts']
+	},
+	{
+		id: 'fluid limits: a fluid clearing at the hottest temperature passes',
+		file: 'src/lib/core/cell/fluid-limits.ts',
+		edits: [['if (max_C < clearing_C) return [];', 'if (max_C <= clearing_C) return [];']],
+		tests: ['tests/cell/fluid-limits.test.ts']
+	},
+	{
+		id: 'fluid limits: the clearing point itself counted as nematic',
+		file: 'src/lib/core/cell/fluid-limits.ts',
+		edits: [['(t) => t < options.clearing_C', '(t) => t <= options.clearing_C']],
+		tests: ['tests/cell/fluid-limits.test.ts']
 	}
 ];

@@ -78,7 +78,10 @@ export function pixelRow(label: string, s: PixelAppearance): string[] {
 
 export function opticsLines(report: DesignReport): string[] {
 	const cell = report.cell;
-	if (!cell) return [`FAIL  ${report.cellError ?? 'the cell was not evaluated'}`];
+	if (!cell)
+		return report.opticsFindings.length > 0
+			? report.opticsFindings.flatMap((f) => findingLines(f))
+			: [`FAIL  ${report.cellError ?? 'the cell was not evaluated'}`];
 	const lines = [
 		`at ${cell.room_C} °C, ${report.drive.isStatic ? 'static' : `1/${report.drive.commons} duty`} drive:`,
 		...formatTable([
@@ -107,6 +110,7 @@ export function opticsLines(report: DesignReport): string[] {
 		]).split('\n'),
 		`switching voltages for the drive check: ${report.thresholdSource}`
 	];
-	for (const f of cell.findings) lines.push(...findingLines(f));
+	// Every optics finding: the cell's own, fluid limits, orientation, disagreement with the model.
+	for (const f of report.opticsFindings) lines.push(...findingLines(f));
 	return lines;
 }

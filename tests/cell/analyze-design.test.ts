@@ -38,8 +38,10 @@ describe('design report with the cell model', () => {
 			drive: { ...demo.drive, temperature: { min_C: 0, max_C: 120 } }
 		};
 		const report = analyzeDesignWithCell(hot);
-		expect(report.cell).toBeNull();
-		expect(report.cellError).toMatch(/clears at .* below the hottest operating temperature 120 °C/);
+		// The generic mixture clears at 90 °C: 0 and 25 °C are still modelled, 120 °C is not.
+		expect(report.cell?.temperatures_C).toEqual([0, 25]);
+		const clears = report.opticsFindings.find((f) => f.code === 'optics.fluid-clears');
+		expect(clears?.message).toMatch(/clears at .* below the hottest operating temperature 120 °C/);
 		expect(report.severity).toBe('fail');
 	});
 

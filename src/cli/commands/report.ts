@@ -11,8 +11,10 @@ import { htmlToPdf } from '../print-pdf';
 export const REPORT_HELP = `Usage: sunglyph report <design.json> --out <file> [--pdf] [--paper a4|letter]
 
 Writes the design report: the drawing at true size with a scale bar, the pin map, the drive
-table and window plot, the cell figures, every finding with its code, the model's limits and
-the cautions. HTML is self-contained (inline styles and SVG); --pdf prints it through the
+table and window plot, the cell figures, the design rules, the electrical load (per line and
+common, total current, battery life), the legibility table, the glass summary (outline, seal,
+ledge, pads, back plates, ghosts), every finding of every check with its code, the model's
+limits and the cautions. HTML is self-contained (inline styles and SVG); --pdf prints it through the
 system's Chromium (headless, no GPU).
 
 Exit status: 0 written (whatever the design's verdict), 2 unreadable or invalid input,

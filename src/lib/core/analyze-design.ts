@@ -20,6 +20,7 @@ import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
 import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-legibility';
 import { orientationFindings } from './viewangle/orientation-findings';
 import { analyzeLoad, type LoadReport } from './load/analyze-load';
+import { fluidLimitFindings } from './cell/fluid-limits';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -65,6 +66,7 @@ export function analyzeDesign(
 		cellFindings.push(...thresholdAgreement(design, cell));
 	cellFindings.push(...orientationFindings(design));
 	if (options.cellTimeLimit_s) cellFindings.push(opticsTimeoutFinding(options.cellTimeLimit_s));
+	cellFindings.push(...fluidLimitFindings(design));
 	if (cellError)
 		cellFindings.push(
 			finding({

@@ -6,6 +6,7 @@
  */
 import type { GeneratorParams, GeneratorParamValue } from '$lib/core/glyphs/glyph-types';
 import { parseMeasure } from './parse-measure';
+import { labelOfKey, wordedReason } from './field-problem';
 
 export type FieldSpec =
 	| {
@@ -136,15 +137,11 @@ export function fieldsForParams(params: GeneratorParams): FieldSpec[] {
 		.filter(([key]) => key !== 'icon')
 		.map(([key, value]): FieldSpec => {
 			if (KNOWN[key]) return KNOWN[key];
-			if (typeof value === 'boolean') return { key, label: key, kind: 'flag' };
+			const { label, unit } = labelOfKey(key);
+			if (typeof value === 'boolean') return { key, label, kind: 'flag' };
 			if (typeof value === 'number')
-				return {
-					key,
-					label: key,
-					kind: 'number',
-					unit: key.endsWith('_mm') ? 'mm' : key.endsWith('_deg') ? '°' : ''
-				};
-			return { key, label: key, kind: 'text' };
+				return { key, label, kind: 'number', unit: unit as 'mm' | '°' | '' };
+			return { key, label, kind: 'text' };
 		});
 }
 
@@ -179,7 +176,7 @@ export function readForm(
 		} else {
 			if (raw.trim() === '' && optional.has(f.key)) continue;
 			const r = parseMeasure(raw, { unit: f.unit || undefined, min: f.min, max: f.max });
-			if (!r.ok) errors[f.key] = r.reason;
+			if (!r.ok) errors[f.key] = wordedReason(r.reason, f.unit);
 			else if (f.integer && !Number.isInteger(r.value)) errors[f.key] = 'enter a whole number';
 			else params[f.key] = r.value;
 		}

@@ -2,11 +2,12 @@
  * The optical report of a design's cell: electro-optic curves and switching voltages at the cold,
  * room and hot ends of the operating range; the look of background, off and on pixels under the
  * design's drive and light; contrast and colour difference; response times against temperature.
+ * Checked temperatures at or above the fluid's clearing point are skipped (see fluid-limits.ts):
+ * the report then covers the nematic part of the range only.
  */
 import type { Design } from '../design/schema';
 import { deltaE2000 } from '../color/delta-e-2000';
 import { responseVsTemperature } from '../lc/response';
-import { materialAt } from '../lc/temperature';
 import { rmsVoltages } from '../drive/rms-drive';
 import type { ThresholdPoint } from '../drive/threshold-at-temperature';
 import { finding, type Finding } from '../findings/finding';
@@ -17,6 +18,7 @@ import { geometryOfCell, materialOfCell } from './resolve-cell';
 import { responseTemperatures } from './response-temperatures';
 import type { ObliqueView } from '../legibility/oblique-views';
 import { rememberStateProfiles } from './state-profiles';
+import { nematicTemperatures } from './fluid-limits';
 
 export const ROOM_C = 25;
 
@@ -64,14 +66,18 @@ export function analyzeCell(
 	const { cell, lighting, drive } = design;
 	const material = materialOfCell(cell);
 	const findings: Finding[] = [];
-	const hot = materialAt({ material, temperature_C: drive.temperature.max_C });
-	if (hot.phase !== 'nematic') {
+	// Temperatures at or above the clearing point are left out (the fluid-limit finding reports
+	// them); everything below is still modelled.
+	const temperatures_C = nematicTemperatures({
+		clearing_C: material.clearing_C,
+		temperatures_C: checkedTemperatures(drive.temperature.min_C, drive.temperature.max_C)
+	});
+	if (temperatures_C.length === 0) {
 		throw new Error(
-			`the fluid clears at ${material.clearing_C} °C, below the hottest operating temperature ` +
-				`${drive.temperature.max_C} °C: the display would blank. Choose a fluid with a higher clearing point.`
+			`the fluid clears at ${material.clearing_C} °C, at or below the coldest operating temperature ` +
+				`${drive.temperature.min_C} °C: no optics can be computed. Choose a fluid with a higher clearing point.`
 		);
 	}
-	const temperatures_C = checkedTemperatures(drive.temperature.min_C, drive.temperature.max_C);
 	const room_C = temperatures_C.includes(ROOM_C)
 		? ROOM_C
 		: temperatures_C[Math.floor(temperatures_C.length / 2)];

@@ -10,6 +10,7 @@ import { VIEW_ANGLE_CODES } from './codes-viewangle';
 import { LOAD_CODES } from './codes-load';
 import { RELIABILITY_CODES } from './codes-reliability';
 import { GLASS_CODES } from './codes-glass';
+import { FLUID_CODES } from './codes-fluid';
 
 export interface FindingCode {
 	code: string;
@@ -24,7 +25,8 @@ export const FINDING_CODES: readonly FindingCode[] = [
 	...LEGIBILITY_CODES,
 	...VIEW_ANGLE_CODES,
 	...GLASS_CODES,
-	...RELIABILITY_CODES
+	...RELIABILITY_CODES,
+	...FLUID_CODES
 ];
 
 const KNOWN = new Set(FINDING_CODES.map((c) => c.code));

@@ -58,7 +58,10 @@ export function runGenerator(
 	} catch (error) {
 		if (error instanceof ZodError) {
 			const issue = error.issues[0];
-			throw new GlyphError(`${kind}: ${issue.path.join('.') || 'parameters'}: ${issue.message}`);
+			throw new GlyphError(`${kind}: ${issue.path.join('.') || 'parameters'}: ${issue.message}`, {
+				param: issue.path.length > 0 ? String(issue.path[0]) : undefined,
+				reason: issue.message
+			});
 		}
 		throw error;
 	}

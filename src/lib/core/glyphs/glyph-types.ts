@@ -27,9 +27,18 @@ export interface GeneratedGroup {
 	readonly parts: readonly ElectrodeDraft[];
 }
 
+/**
+ * A generator refused its parameters. `param` names the parameter at fault when there is one
+ * (e.g. `gap_mm`), and `reason` says what is wrong with it in words a form can show beside the
+ * field (e.g. "expected a number above 0"); `message` is the whole sentence for logs and the CLI.
+ */
 export class GlyphError extends Error {
-	constructor(message: string) {
+	readonly param: string | null;
+	readonly reason: string;
+	constructor(message: string, options: { param?: string; reason?: string } = {}) {
 		super(message);
 		this.name = 'GlyphError';
+		this.param = options.param ?? null;
+		this.reason = options.reason ?? message;
 	}
 }

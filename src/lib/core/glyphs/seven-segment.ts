@@ -35,9 +35,15 @@ const SEVEN_SEGMENT_BARS: readonly BarDef[] = [
 /** Proportions below which bars would vanish or collide. */
 export function checkSevenSegmentProportions(p: SegmentCharacterParams): void {
 	if (p.width_mm < 3 * p.stroke_mm + 2 * p.gap_mm)
-		throw new GlyphError('the digit is too narrow: width must be at least 3 strokes plus 2 gaps');
+		throw new GlyphError('the digit is too narrow: width must be at least 3 strokes plus 2 gaps', {
+			param: 'width_mm',
+			reason: 'too narrow: at least 3 strokes plus 2 gaps'
+		});
 	if (p.height_mm < 5 * p.stroke_mm + 4 * p.gap_mm)
-		throw new GlyphError('the digit is too short: height must be at least 5 strokes plus 4 gaps');
+		throw new GlyphError('the digit is too short: height must be at least 5 strokes plus 4 gaps', {
+			param: 'height_mm',
+			reason: 'too short: at least 5 strokes plus 4 gaps'
+		});
 }
 
 export function sevenSegmentOutlines(

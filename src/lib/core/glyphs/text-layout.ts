@@ -51,7 +51,9 @@ function tokenize(text: string): Cell[] {
 		if (!MARKS.has(char)) return void cells.push({ char, position, marks: [] });
 		const last = cells[cells.length - 1];
 		if (!last)
-			throw new GlyphError(`'${char}' at position ${position + 1} needs a character before it`);
+			throw new GlyphError(`'${char}' at position ${position + 1} needs a character before it`, {
+				param: 'text'
+			});
 		last.marks.push(char);
 	});
 	return cells;
@@ -68,13 +70,16 @@ function chooseCount(cells: readonly Cell[], params: TextParams): SegmentCount {
 		const bad = failing(count);
 		if (bad)
 			throw new GlyphError(
-				`a ${count}-segment character cannot show '${bad.char}' (position ${bad.position + 1})`
+				`a ${count}-segment character cannot show '${bad.char}' (position ${bad.position + 1})`,
+				{ param: 'text' }
 			);
 		return count;
 	}
 	for (const count of [7, 14, 16] as const) if (!failing(count)) return count;
 	const bad = failing(16)!;
-	throw new GlyphError(`no segment style can show '${bad.char}' (position ${bad.position + 1})`);
+	throw new GlyphError(`no segment style can show '${bad.char}' (position ${bad.position + 1})`, {
+		param: 'text'
+	});
 }
 
 const outlinesFor = (
@@ -146,6 +151,6 @@ export function layoutText(input: z.input<typeof textSchema>): GeneratedGroup {
 		}
 		x = Math.max(x + pitch, markX);
 	});
-	if (parts.length === 0) throw new GlyphError('the text has nothing to draw');
+	if (parts.length === 0) throw new GlyphError('the text has nothing to draw', { param: 'text' });
 	return { kind: 'text', params, name: `Text "${params.text}"`, idPrefix: 'text', parts };
 }

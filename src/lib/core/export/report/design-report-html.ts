@@ -1,21 +1,28 @@
 /**
  * The printable design report: one self-contained HTML page set (inline CSS and SVG, no scripts,
  * no external files) for a design review or a glass maker — the drawing to scale with a scale
- * bar, the pin map, the drive table and window plot, the cell figures, every finding with its
- * code, further sections the caller adds (legibility, load, glass), the model's limits and the
- * cautions. The same string comes from the app and from `sunglyph report`; it is deterministic
+ * bar, the pin map, the drive table and window plot, the cell figures, the design rules, the
+ * electrical load, the legibility table (when the design has scenarios), the glass summary, every
+ * finding of every analysis with its code, further sections the caller adds, the model's limits
+ * and the cautions. The same string comes from the app and from `sunglyph report`; it is deterministic
  * (no clock inside: pass `generatedOn` to date it).
  */
 import type { Design } from '../../design/schema';
 import type { DesignReport } from '../../analyze-design';
 import type { Finding } from '../../findings/finding';
-import { sortFindings } from '../../findings/finding';
+import { checkGlass, type GlassReport } from '../../glass/check-glass';
 import { designToSvg } from '../design-svg';
 import { commonColour } from '../common-colours';
 import { escapeHtml, fixed, htmlTable } from './html-text';
 import { windowPlotSvg } from './window-plot-svg';
 import { REPORT_CSS } from './report-css';
 import { legibilityModelHtml } from './legibility-model-html';
+import { reportFindings } from './report-findings';
+import { findingsTable } from './findings-table';
+import { rulesSection } from './rules-section';
+import { loadSection } from './load-section';
+import { legibilitySection } from './legibility-section';
+import { glassSection } from './glass-section';
 
 export type PaperSize = 'a4' | 'letter';
 
@@ -41,8 +48,10 @@ export const REPORT_CAUTION =
 export function designReportHtml(options: {
 	design: Design;
 	report: DesignReport;
-	/** Every finding to list; defaults to the wiring, drive and optics findings of the report. */
+	/** Findings of analyses outside the report to list too (every report finding is listed). */
 	findings?: readonly Finding[];
+	/** The glass check, when the caller has it; computed here otherwise. */
+	glass?: GlassReport;
 	sections?: readonly ReportSection[];
 	paper?: PaperSize;
 	generatedOn?: string;
@@ -51,13 +60,8 @@ export function designReportHtml(options: {
 	limits?: readonly string[];
 }): string {
 	const { design, report } = options;
-	const findings = sortFindings(
-		options.findings ?? [
-			...report.wiring.findings,
-			...report.drive.findings,
-			...report.opticsFindings
-		]
-	);
+	const glass = options.glass ?? checkGlass(design);
+	const findings = reportFindings(report, [...glass.findings, ...(options.findings ?? [])]);
 	const byName = new Map(design.electrodes.map((e) => [e.id, e.name || e.id]));
 	const body = [
 		header(design, report, options),
@@ -65,10 +69,23 @@ export function designReportHtml(options: {
 		section('Pin map', pinMapTable(design)),
 		section('Drive', driveSection(design, report)),
 		section('Cell and optics', cellSection(report)),
-		section('Findings', findingsTable(findings, byName)),
-		...(report.legibility
+		section('Design rules', rulesSection({ design, rules: report.rules, names: byName })),
+		section('Electrical load', loadSection(report.load)),
+		...(design.legibility.scenarios.length > 0
+			? [
+					section(
+						'Legibility',
+						report.legibility
+							? legibilitySection(report.legibility)
+							: '<p>Not evaluated: the cell model gave no optics.</p>'
+					)
+				]
+			: []),
+		...(report.legibility && design.legibility.scenarios.length > 0
 			? [section('Legibility: optics per scenario', legibilityModelHtml(report.legibility))]
 			: []),
+		section('Glass', glassSection({ design, glass })),
+		section('Findings', findingsTable(findings, byName)),
 		...(options.sections ?? []).map((s) => section(s.title, s.html)),
 		section(
 			'Model limits and cautions',
@@ -231,20 +248,4 @@ function cellSection(report: DesignReport): string {
 		swatch('off', c.off.srgbHex, c.off.Y, c.off.luminance_cdm2),
 		`${swatch('on', c.on.srgbHex, c.on.Y, c.on.luminance_cdm2)}</p>`
 	].join('\n');
-}
-
-function findingsTable(findings: readonly Finding[], byName: Map<string, string>): string {
-	if (findings.length === 0) return '<p>No findings.</p>';
-	const word = { pass: 'OK', warn: 'Check', fail: 'Fails' } as const;
-	return htmlTable({
-		head: ['', 'Code', 'Finding', 'Fix', 'Electrodes'],
-		className: 'findings',
-		rows: findings.map((f) => [
-			{ html: `<b class="${f.severity}">${word[f.severity]}</b>` },
-			{ html: `<code>${escapeHtml(f.code)}</code>` },
-			f.message,
-			f.fix || '—',
-			f.electrodes.length ? f.electrodes.map((id) => byName.get(id) ?? id).join(', ') : '—'
-		])
-	});
 }

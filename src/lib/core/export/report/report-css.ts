@@ -12,10 +12,15 @@ table { border-collapse: collapse; margin: 2mm 0; font-size: 9.5pt; }
 th, td { border: 1px solid #ccc; padding: 1mm 2mm; text-align: left; vertical-align: top; }
 th { background: #f2f2f2; }
 td.num, th.num { text-align: right; font-variant-numeric: tabular-nums; }
-table.findings { width: 100%; }
-table.findings td:nth-child(3), table.findings td:nth-child(4) { overflow-wrap: anywhere; }
-code { font-size: 8pt; white-space: nowrap; }
+table.findings { width: 100%; table-layout: fixed; }
+table.findings th:nth-child(1) { width: 9%; }
+table.findings th:nth-child(2) { width: 45%; }
+table.findings th:nth-child(3) { width: 25%; }
+table.findings td { overflow-wrap: break-word; }
+table.findings code { font-weight: 600; }
+code { font-size: 7.5pt; white-space: nowrap; }
 .cols { display: flex; gap: 6mm; flex-wrap: wrap; align-items: flex-start; }
+@media print { body { max-width: none; padding: 0; } .cols { display: block; } .cols > table { display: inline-table; margin-right: 6mm; } }
 figure.drawing { margin: 0; }
 figure.drawing > svg { display: block; max-width: 100%; height: auto; }
 @media print { figure.drawing > svg { max-width: none; height: revert; } }
