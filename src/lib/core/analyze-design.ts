@@ -20,6 +20,7 @@ import { checkDesignRules, type RulesReport } from './rules/check-design-rules';
 import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-legibility';
 import { orientationFindings } from './viewangle/orientation-findings';
 import { analyzeLoad, type LoadReport } from './load/analyze-load';
+import { glassInCheck, type GlassCheckSummary } from './glass/glass-in-check';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -38,6 +39,8 @@ export interface DesignReport {
 	legibility: LegibilityReport | null;
 	/** Electrical load: capacitance, current, battery life, trace settling. */
 	load: LoadReport;
+	/** The glass check of the stored glass drawing; null while the design has none. */
+	glass: GlassCheckSummary | null;
 	severity: Severity;
 }
 
@@ -75,6 +78,7 @@ export function analyzeDesign(
 			})
 		);
 	const legibility = cell ? analyzeLegibility({ design, cell }) : null;
+	const glass = glassInCheck(design);
 	return {
 		design: {
 			name: design.name,
@@ -91,13 +95,15 @@ export function analyzeDesign(
 		thresholdSource: useModel ? 'cell model' : 'entered',
 		legibility,
 		load,
+		glass,
 		severity: overallSeverity([
 			...wiring.findings,
 			...drive.findings,
 			...cellFindings,
 			...rules.findings,
 			...(legibility?.findings ?? []),
-			...load.findings
+			...load.findings,
+			...(glass?.findings ?? [])
 		])
 	};
 }

@@ -5,11 +5,19 @@
  * straight runs. Many sources, many targets; the search stops at the first target reached.
  *
  * Step cost = 1 + the cell's extra cost; a change of heading adds BEND_COST. A cell is passable
- * for net k when it is FREE or owned by k; target cells are always enterable.
+ * for net k when it is FREE or owned by k; target cells are always enterable. Before the search a
+ * plain flood fill (cells only, no costs) asks whether any target can be reached at all, so a lead
+ * that cannot exist costs one sweep of its region rather than a full least-cost search. A costed
+ * search that runs past its budget of queue pops gives way to the plain shortest path (extra costs
+ * ignored), which the distance estimate steers tightly: the lead exists, it may light more ghosts.
  */
 import { FREE, type RouteGrid } from './route-grid';
 
 const BEND_COST = 4;
+/** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
+const HEURISTIC_WEIGHT = 1;
+/** Queue pops the costed search may take before the plain shortest path is taken instead. */
+const COSTED_POPS = 20_000;
 const DX = [1, -1, 0, 0];
 const DY = [0, 0, 1, -1];
 
@@ -19,6 +27,9 @@ export class GridSearch {
 	private readonly prev: Int32Array;
 	private readonly stamp: Uint32Array;
 	private epoch = 0;
+	private readonly floodStamp: Uint32Array;
+	private readonly floodQueue: Int32Array;
+	private floodEpoch = 0;
 	private heapCost: Float64Array = new Float64Array(1024);
 	private heapState: Int32Array = new Int32Array(1024);
 	private heapSize = 0;
@@ -28,6 +39,47 @@ export class GridSearch {
 		this.dist = new Float64Array(states);
 		this.prev = new Int32Array(states);
 		this.stamp = new Uint32Array(states);
+		this.floodStamp = new Uint32Array(grid.nx * grid.ny);
+		this.floodQueue = new Int32Array(grid.nx * grid.ny);
+	}
+
+	/** Whether the last flood fill that found no target passed through `cell`. */
+	floodedInVain(cell: number): boolean {
+		return this.floodStamp[cell] === this.floodEpoch && !this.floodFound;
+	}
+
+	private floodFound = false;
+
+	/** Whether some target cell can be reached from the sources through cells passable for `net`. */
+	reachable(options: { sources: readonly number[]; target: Uint8Array; net: number }): boolean {
+		const { grid, floodStamp: seen, floodQueue: queue } = this;
+		const { sources, target, net } = options;
+		const mark = ++this.floodEpoch;
+		let head = 0,
+			tail = 0;
+		for (const c of sources) {
+			if (seen[c] === mark) continue;
+			seen[c] = mark;
+			queue[tail++] = c;
+		}
+		while (head < tail) {
+			const cell = queue[head++];
+			const ix = cell % grid.nx;
+			const iy = (cell - ix) / grid.nx;
+			for (let h = 0; h < 4; h++) {
+				const jx = ix + DX[h],
+					jy = iy + DY[h];
+				if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
+				const next = jy * grid.nx + jx;
+				if (seen[next] === mark) continue;
+				if (target[next]) return (this.floodFound = true);
+				const o = grid.owner[next];
+				if (o !== FREE && o !== net) continue;
+				seen[next] = mark;
+				queue[tail++] = next;
+			}
+		}
+		return (this.floodFound = false);
 	}
 
 	private push(cost: number, state: number): void {
@@ -81,8 +133,24 @@ export class GridSearch {
 		/** Cell-index boxes [ix0, iy0, ix1, iy1] around the targets, for the A* estimate. */
 		boxes: readonly (readonly [number, number, number, number])[];
 	}): number[] | null {
+		if (!this.reachable(options)) return null;
+		return (
+			this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS }) ??
+			this.leastCost({ ...options, useCost: false, maxPops: Infinity })
+		);
+	}
+
+	private leastCost(options: {
+		sources: readonly number[];
+		target: Uint8Array;
+		net: number;
+		boxes: readonly (readonly [number, number, number, number])[];
+		useCost: boolean;
+		maxPops: number;
+	}): number[] | null {
 		const { grid } = this;
-		const { sources, target, net, boxes } = options;
+		const { sources, target, net, boxes, useCost } = options;
+		let budget = options.maxPops;
 		const estimate = (cell: number) => {
 			const ix = cell % grid.nx;
 			const iy = (cell - ix) / grid.nx;
@@ -91,7 +159,7 @@ export class GridSearch {
 				const d = Math.max(0, b[0] - ix, ix - b[2]) + Math.max(0, b[1] - iy, iy - b[3]);
 				if (d < best) best = d;
 			}
-			return best === Infinity ? 0 : best;
+			return best === Infinity ? 0 : best * HEURISTIC_WEIGHT;
 		};
 		this.epoch++;
 		this.heapSize = 0;
@@ -106,6 +174,7 @@ export class GridSearch {
 			}
 		}
 		while (this.heapSize > 0) {
+			if (budget-- <= 0) return null;
 			const priority = this.heapCost[0];
 			const state = this.pop();
 			const cell = state >> 2;
@@ -123,7 +192,9 @@ export class GridSearch {
 				const o = grid.owner[next];
 				if (!target[next] && o !== FREE && o !== net) continue;
 				const step =
-					1 + grid.cost[next] + (h === heading || this.prev[state] === -1 ? 0 : BEND_COST);
+					1 +
+					(useCost ? grid.cost[next] : 0) +
+					(h === heading || this.prev[state] === -1 ? 0 : BEND_COST);
 				const ns = next * 4 + h;
 				const nd = cost + step;
 				if (!seen(ns) || nd < this.dist[ns]) {

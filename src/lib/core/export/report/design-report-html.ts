@@ -54,7 +54,8 @@ export function designReportHtml(options: {
 		options.findings ?? [
 			...report.wiring.findings,
 			...report.drive.findings,
-			...report.opticsFindings
+			...report.opticsFindings,
+			...(report.glass?.findings ?? [])
 		]
 	);
 	const byName = new Map(design.electrodes.map((e) => [e.id, e.name || e.id]));
