@@ -17,7 +17,7 @@ const BEND_COST = 4;
 /** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
 const HEURISTIC_WEIGHT = 1;
 /** Queue pops the costed search may take before the plain shortest path is taken instead. */
-const COSTED_POPS = 20_000;
+const COSTED_POPS = 60_000;
 const DX = [1, -1, 0, 0];
 const DY = [0, 0, 1, -1];
 
