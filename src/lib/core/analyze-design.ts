@@ -51,6 +51,8 @@ export function analyzeDesign(
 		cellError?: string | null;
 		/** Set when the optical model was stopped at its time limit (seconds). */
 		cellTimeLimit_s?: number | null;
+		/** The glass check computed elsewhere (e.g. in a worker); computed here when left out. */
+		glass?: GlassCheckSummary | null;
 	} = {}
 ): DesignReport {
 	const cell = options.cell ?? null;
@@ -78,7 +80,7 @@ export function analyzeDesign(
 			})
 		);
 	const legibility = cell ? analyzeLegibility({ design, cell }) : null;
-	const glass = glassInCheck(design);
+	const glass = options.glass !== undefined ? options.glass : glassInCheck(design);
 	return {
 		design: {
 			name: design.name,

@@ -29,6 +29,8 @@ export class GridSearch {
 	private epoch = 0;
 	private readonly floodStamp: Uint32Array;
 	private readonly floodQueue: Int32Array;
+	private readonly floodStampB: Uint32Array;
+	private readonly floodQueueB: Int32Array;
 	private floodEpoch = 0;
 	private heapCost: Float64Array = new Float64Array(1024);
 	private heapState: Int32Array = new Int32Array(1024);
@@ -41,45 +43,105 @@ export class GridSearch {
 		this.stamp = new Uint32Array(states);
 		this.floodStamp = new Uint32Array(grid.nx * grid.ny);
 		this.floodQueue = new Int32Array(grid.nx * grid.ny);
+		this.floodStampB = new Uint32Array(grid.nx * grid.ny);
+		this.floodQueueB = new Int32Array(grid.nx * grid.ny);
 	}
 
-	/** Whether the last flood fill that found no target passed through `cell`. */
+	/** Whether the last fill that found no way ran dry on the sources' side and swept `cell`. */
 	floodedInVain(cell: number): boolean {
-		return this.floodStamp[cell] === this.floodEpoch && !this.floodFound;
+		return this.sourceSideDry && this.floodStamp[cell] === this.floodEpoch;
 	}
 
-	private floodFound = false;
+	private sourceSideDry = false;
 
-	/** Whether some target cell can be reached from the sources through cells passable for `net`. */
-	reachable(options: { sources: readonly number[]; target: Uint8Array; net: number }): boolean {
-		const { grid, floodStamp: seen, floodQueue: queue } = this;
+	/** Adds the passable, unseen neighbours of `cell` to one side's queue; true when the sides meet. */
+	private spread(options: {
+		cell: number;
+		net: number;
+		mine: Uint32Array;
+		theirs: Uint32Array | null;
+		target: Uint8Array | null;
+		queue: Int32Array;
+		tail: number;
+	}): number {
+		const { grid } = this;
+		const { cell, net, mine, theirs, target, queue } = options;
+		const mark = this.floodEpoch;
+		let tail = options.tail;
+		const ix = cell % grid.nx;
+		const iy = (cell - ix) / grid.nx;
+		for (let h = 0; h < 4; h++) {
+			const jx = ix + DX[h],
+				jy = iy + DY[h];
+			if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
+			const next = jy * grid.nx + jx;
+			if (mine[next] === mark) continue;
+			if ((target && target[next]) || (theirs && theirs[next] === mark)) return -1;
+			const o = grid.owner[next];
+			if (o !== FREE && o !== net) continue;
+			mine[next] = mark;
+			queue[tail++] = next;
+		}
+		return tail;
+	}
+
+	/**
+	 * Whether some target cell can be reached from the sources through cells passable for `net`.
+	 * With `targetCells` the fill runs from both ends in turn and stops as soon as either side runs
+	 * dry, so a small closed region costs little whichever end it holds.
+	 */
+	reachable(options: {
+		sources: readonly number[];
+		target: Uint8Array;
+		net: number;
+		targetCells?: readonly number[];
+	}): boolean {
+		const { floodStamp: a, floodStampB: b, floodQueue: qa, floodQueueB: qb } = this;
 		const { sources, target, net } = options;
 		const mark = ++this.floodEpoch;
-		let head = 0,
-			tail = 0;
+		this.sourceSideDry = false;
+		let ha = 0,
+			ta = 0,
+			hb = 0,
+			tb = 0;
 		for (const c of sources) {
-			if (seen[c] === mark) continue;
-			seen[c] = mark;
-			queue[tail++] = c;
+			if (a[c] === mark) continue;
+			a[c] = mark;
+			qa[ta++] = c;
 		}
-		while (head < tail) {
-			const cell = queue[head++];
-			const ix = cell % grid.nx;
-			const iy = (cell - ix) / grid.nx;
-			for (let h = 0; h < 4; h++) {
-				const jx = ix + DX[h],
-					jy = iy + DY[h];
-				if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
-				const next = jy * grid.nx + jx;
-				if (seen[next] === mark) continue;
-				if (target[next]) return (this.floodFound = true);
-				const o = grid.owner[next];
-				if (o !== FREE && o !== net) continue;
-				seen[next] = mark;
-				queue[tail++] = next;
+		const twoSided = options.targetCells !== undefined;
+		for (const c of options.targetCells ?? []) {
+			if (b[c] === mark) continue;
+			b[c] = mark;
+			qb[tb++] = c;
+		}
+		const theirs = twoSided ? b : null;
+		for (;;) {
+			if (ha === ta) {
+				this.sourceSideDry = true;
+				return false;
 			}
+			ta = this.spread({ cell: qa[ha++], net, mine: a, theirs, target, queue: qa, tail: ta });
+			if (ta < 0) return true;
+			if (!twoSided) continue;
+			if (hb === tb) {
+				// The target's region is complete: the sources reach it only through a neighbour in it.
+				for (const c of sources)
+					if (this.spread({ cell: c, net, mine: a, theirs: b, target, queue: qa, tail: 0 }) < 0)
+						return true;
+				return false;
+			}
+			tb = this.spread({
+				cell: qb[hb++],
+				net,
+				mine: b,
+				theirs: a,
+				target: null,
+				queue: qb,
+				tail: tb
+			});
+			if (tb < 0) return true;
 		}
-		return (this.floodFound = false);
 	}
 
 	private push(cost: number, state: number): void {
@@ -132,6 +194,8 @@ export class GridSearch {
 		net: number;
 		/** Cell-index boxes [ix0, iy0, ix1, iy1] around the targets, for the A* estimate. */
 		boxes: readonly (readonly [number, number, number, number])[];
+		/** The target cells as a list, for a fill from both ends. */
+		targetCells?: readonly number[];
 	}): number[] | null {
 		if (!this.reachable(options)) return null;
 		return (

@@ -74,6 +74,7 @@ export function routeNet(options: {
 	const unreached: Terminal[] = [];
 	if (terminals.length === 0) return { leads, unreached };
 	const inTree = new Uint8Array(grid.nx * grid.ny);
+	const treeCells: number[] = [];
 	const terminalAt = new Map<number, number[]>();
 	const cellsOf = terminals.map((t) => grid.cellsInside(t.ring));
 	cellsOf.forEach((cells, t) =>
@@ -91,6 +92,7 @@ export function routeNet(options: {
 		for (const c of cells) {
 			if (inTree[c]) continue;
 			inTree[c] = 1;
+			treeCells.push(c);
 			for (const t of terminalAt.get(c) ?? []) if (pending.has(t)) touched.push(t);
 		}
 	};
@@ -115,6 +117,7 @@ export function routeNet(options: {
 		const cells = search.search({
 			sources: cellsOf[next],
 			target: inTree,
+			targetCells: treeCells,
 			net,
 			boxes: [boxes[nearest[next].to]]
 		});
