@@ -61,14 +61,29 @@ function cellBox(grid: RouteGrid, cells: readonly number[]): Box {
 const boxGap = (a: Box, b: Box): number =>
 	Math.max(0, a[0] - b[2], b[0] - a[2]) + Math.max(0, a[1] - b[3], b[1] - a[3]);
 
-export function routeNet(options: {
+export interface NetOptions {
 	grid: RouteGrid;
 	search: GridSearch;
 	net: number;
 	terminals: readonly Terminal[];
 	width_mm: number;
 	clearance_mm: number;
-}): NetRoute {
+}
+
+/** Routes the whole net at once. */
+export function routeNet(options: NetOptions): NetRoute {
+	const steps = growNet(options);
+	for (;;) {
+		const step = steps.next();
+		if (step.done) return step.value;
+	}
+}
+
+/**
+ * Routes the net one join at a time: each `next()` joins (or gives up on) one terminal, so several
+ * nets can grow in turn and none spreads over the plate before the others have their first leads.
+ */
+export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	const { grid, search, net, terminals, width_mm, clearance_mm } = options;
 	const leads: XY[][] = [];
 	const unreached: Terminal[] = [];
@@ -129,6 +144,7 @@ export function routeNet(options: {
 					pending.delete(p);
 					unreached.push(terminals[p]);
 				}
+			yield;
 			continue;
 		}
 		const lead = cellsToPolyline(grid, cells);
@@ -137,6 +153,7 @@ export function routeNet(options: {
 			grid.claim(leadRing({ a: lead[i - 1], b: lead[i], width_mm }), net, clearance_mm);
 		join(cells);
 		reach(next);
+		yield;
 	}
 	return { leads, unreached };
 }
