@@ -1,10 +1,12 @@
 /**
  * Routes one net on a plate as a growing tree (the Steiner heuristic of maze routers: Lee, IRE
  * Trans. EC-10, 1961, with least-cost searches). The first terminal (a pad or a transfer point) is
- * the root; the pending terminal nearest to a joined one (Prim's order, Prim, BSTJ 36, 1957, on
- * bounding-box distance) is joined next, by a search from that terminal to any cell of the tree,
- * leads included, steered towards its nearest joined neighbour. A terminal no search reaches is
- * left out, with every terminal in the region its search swept, and the others go on.
+ * the root. While few terminals are pending, one search from the whole tree to all of them joins
+ * the cheapest to reach. With many (a common's back-plate pieces) the pending terminal nearest to
+ * a joined one (Prim's order, Prim, BSTJ 36, 1957, on bounding-box distance) is joined next, by a
+ * search from that terminal to any cell of the tree, leads included, steered towards its nearest
+ * joined neighbour: a small start, so the search stays local. A terminal no search reaches is left
+ * out, with every terminal in the region its search swept, and the others go on.
  *
  * Leads are cell-centre polylines with collinear points dropped; each new lead claims its cells
  * (with the clearance) so later nets keep their distance.
@@ -57,6 +59,9 @@ function cellBox(grid: RouteGrid, cells: readonly number[]): Box {
 	}
 	return box;
 }
+
+/** Up to this many pending terminals, one search from the tree looks for all of them at once. */
+const FEW_TERMINALS = 8;
 
 const boxGap = (a: Box, b: Box): number =>
 	Math.max(0, a[0] - b[2], b[0] - a[2]) + Math.max(0, a[1] - b[3], b[1] - a[3]);
@@ -119,12 +124,48 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 			if (gap < nearest[p].gap) nearest[p] = { gap, to: t };
 		}
 	};
+	const layLead = (cells: readonly number[]) => {
+		const lead = cellsToPolyline(grid, cells);
+		leads.push(lead);
+		for (let i = 1; i < lead.length; i++)
+			grid.claim(leadRing({ a: lead[i - 1], b: lead[i], width_mm }), net, clearance_mm);
+		join(cells);
+	};
 	for (let t = 1; t < terminals.length; t++) pending.add(t);
 	reach(0);
 	while (pending.size > 0) {
 		const t = touched.pop();
 		if (t !== undefined) {
 			if (pending.has(t)) reach(t);
+			continue;
+		}
+		if (pending.size <= FEW_TERMINALS) {
+			// Few terminals: search from the whole tree to all of them and take the cheapest reached.
+			const targets = new Uint8Array(grid.nx * grid.ny);
+			const targetCells: number[] = [];
+			for (const p of pending)
+				for (const c of cellsOf[p]) {
+					targets[c] = 1;
+					targetCells.push(c);
+				}
+			const cells = search.search({
+				sources: treeCells,
+				target: targets,
+				targetCells,
+				net,
+				boxes: [...pending].map((p) => boxes[p])
+			});
+			if (!cells) {
+				for (const p of pending) unreached.push(terminals[p]);
+				pending.clear();
+				yield;
+				continue;
+			}
+			layLead(cells);
+			const end = cells[cells.length - 1];
+			const hit = (terminalAt.get(end) ?? []).find((p) => pending.has(p));
+			if (hit !== undefined) reach(hit);
+			yield;
 			continue;
 		}
 		let next = -1;
@@ -147,11 +188,7 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 			yield;
 			continue;
 		}
-		const lead = cellsToPolyline(grid, cells);
-		leads.push(lead);
-		for (let i = 1; i < lead.length; i++)
-			grid.claim(leadRing({ a: lead[i - 1], b: lead[i], width_mm }), net, clearance_mm);
-		join(cells);
+		layLead(cells);
 		reach(next);
 		yield;
 	}
