@@ -30,6 +30,9 @@ import { viewAngleBenchmarks } from './view-angle-bench';
 import { analyzeLoad } from '../src/lib/core/load/analyze-load';
 import { loadBenchDesign } from './load-design';
 
+/** `BENCH_ONLY=glass npm run bench` times only the rows whose name contains the text. */
+const ONLY = process.env.BENCH_ONLY ?? '';
+
 interface Row {
 	name: string;
 	target_ms: number | null;
@@ -44,6 +47,8 @@ function measure(
 	runs: number,
 	body: (i: number) => void
 ): Row {
+	if (ONLY && !name.includes(ONLY))
+		return { name, target_ms, median_ms: NaN, p90_ms: NaN, runs: 0 };
 	for (let i = 0; i < Math.min(20, runs); i++) body(i); // warm-up
 	const times: number[] = [];
 	for (let i = 0; i < runs; i++) {
@@ -242,6 +247,7 @@ console.log(
 	`${pad('benchmark', 58)}${'median'.padStart(11)}${'p90'.padStart(11)}${'target'.padStart(10)}${'ratio'.padStart(8)}  runs`
 );
 for (const r of rows) {
+	if (r.runs === 0) continue;
 	const ratio = r.target_ms === null ? '' : (r.median_ms / r.target_ms).toFixed(2);
 	console.log(
 		`${pad(r.name, 58)}${(r.median_ms.toFixed(3) + ' ms').padStart(11)}${(r.p90_ms.toFixed(3) + ' ms').padStart(11)}` +

@@ -17,6 +17,7 @@ import { defaultLegibility } from '../src/lib/core/design/legibility-schema';
 import { DEFAULT_ORIENTATION } from '../src/lib/core/design/orientation-schema';
 import { DEFAULT_GLASS_ART } from '../src/lib/core/design/glass-art-schema';
 import { planGlass } from '../src/lib/core/glass/plan-glass';
+import { checkGlass } from '../src/lib/core/glass/check-glass';
 
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 const pt = (x: number, y: number, inH?: [number, number], outH?: [number, number]): Point => ({
@@ -280,8 +281,18 @@ const design: Design = {
 	glassArt: DEFAULT_GLASS_ART
 };
 
-// The glass drawing (transfer points and traces) is generated for the drawing above.
-const withGlass: Design = { ...design, glassArt: planGlass(design).glassArt };
+// The glass drawing (transfer points and traces) is generated for the drawing above and stored
+// only when it passes the glass check: the demo must pass every check it is judged by.
+const plan = planGlass(design);
+const planned: Design = { ...design, glassArt: plan.glassArt };
+const glassFaults = [...plan.findings, ...checkGlass(planned).findings].filter(
+	(f) => f.severity !== 'pass'
+);
+const withGlass: Design = glassFaults.length === 0 ? planned : design;
+if (glassFaults.length > 0)
+	console.log(
+		`glass drawing not stored: ${glassFaults.length} open glass findings (${[...new Set(glassFaults.map((f) => f.code))].join(', ')})`
+	);
 
 const target = new URL('../src/lib/core/design/demo-design.json', import.meta.url);
 writeFileSync(target, serializeDesign(withGlass));

@@ -21,11 +21,12 @@ let art: GlassArtwork;
 let files: ExportFile[];
 const file = (suffix: string) => files.find((f) => f.name.endsWith(suffix))!.content;
 
+// Routing the demo and writing every file takes seconds on a busy machine: the same allowance as a test.
 beforeAll(() => {
 	design = routedDemo();
 	art = buildArtwork(design);
 	files = glassExportFiles(design);
-});
+}, 60_000);
 
 /** The SVG without its outline strokes, so only conductors are drawn. */
 const conductorsOnly = (svg: string) => svg.replace(/<g id="outlines"[\s\S]*?<\/g>\n/, '');

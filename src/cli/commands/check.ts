@@ -68,6 +68,10 @@ export async function runCheck(args: string[], io: CliIo): Promise<number> {
 		lines.push('', 'Load');
 		lines.push(...loadSummaryLines(report.load).map((l) => `  ${l}`));
 		for (const f of report.load.findings) lines.push(...findingLines(f).map((l) => `  ${l}`));
+		if (report.glass) {
+			lines.push('', 'Glass');
+			for (const f of report.glass.findings) lines.push(...findingLines(f).map((l) => `  ${l}`));
+		}
 		lines.push(
 			'',
 			`Overall: ${report.severity === 'fail' ? 'FAIL' : report.severity === 'warn' ? 'pass with warnings' : 'pass'}`

@@ -21,6 +21,7 @@ import { analyzeLegibility, type LegibilityReport } from './legibility/analyze-l
 import { orientationFindings } from './viewangle/orientation-findings';
 import { analyzeLoad, type LoadReport } from './load/analyze-load';
 import { fluidLimitFindings } from './cell/fluid-limits';
+import { glassInCheck, type GlassCheckSummary } from './glass/glass-in-check';
 
 export interface DesignReport {
 	design: { name: string; electrodes: number; commons: number; segmentLines: number };
@@ -39,6 +40,8 @@ export interface DesignReport {
 	legibility: LegibilityReport | null;
 	/** Electrical load: capacitance, current, battery life, trace settling. */
 	load: LoadReport;
+	/** The glass check of the stored glass drawing; null while the design has none. */
+	glass: GlassCheckSummary | null;
 	severity: Severity;
 }
 
@@ -49,6 +52,8 @@ export function analyzeDesign(
 		cellError?: string | null;
 		/** Set when the optical model was stopped at its time limit (seconds). */
 		cellTimeLimit_s?: number | null;
+		/** The glass check computed elsewhere (e.g. in a worker); computed here when left out. */
+		glass?: GlassCheckSummary | null;
 	} = {}
 ): DesignReport {
 	const cell = options.cell ?? null;
@@ -77,6 +82,7 @@ export function analyzeDesign(
 			})
 		);
 	const legibility = cell ? analyzeLegibility({ design, cell }) : null;
+	const glass = options.glass !== undefined ? options.glass : glassInCheck(design);
 	return {
 		design: {
 			name: design.name,
@@ -93,13 +99,15 @@ export function analyzeDesign(
 		thresholdSource: useModel ? 'cell model' : 'entered',
 		legibility,
 		load,
+		glass,
 		severity: overallSeverity([
 			...wiring.findings,
 			...drive.findings,
 			...cellFindings,
 			...rules.findings,
 			...(legibility?.findings ?? []),
-			...load.findings
+			...load.findings,
+			...(glass?.findings ?? [])
 		])
 	};
 }

@@ -5,11 +5,19 @@
  * straight runs. Many sources, many targets; the search stops at the first target reached.
  *
  * Step cost = 1 + the cell's extra cost; a change of heading adds BEND_COST. A cell is passable
- * for net k when it is FREE or owned by k; target cells are always enterable.
+ * for net k when it is FREE or owned by k; target cells are always enterable. Before the search a
+ * plain flood fill (cells only, no costs) asks whether any target can be reached at all, so a lead
+ * that cannot exist costs one sweep of its region rather than a full least-cost search. A costed
+ * search that runs past its budget of queue pops gives way to the plain shortest path (extra costs
+ * ignored), which the distance estimate steers tightly: the lead exists, it may light more ghosts.
  */
 import { FREE, type RouteGrid } from './route-grid';
 
 const BEND_COST = 4;
+/** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
+const HEURISTIC_WEIGHT = 1;
+/** Queue pops the costed search may take before the plain shortest path is taken instead. */
+const COSTED_POPS = 60_000;
 const DX = [1, -1, 0, 0];
 const DY = [0, 0, 1, -1];
 
@@ -19,6 +27,11 @@ export class GridSearch {
 	private readonly prev: Int32Array;
 	private readonly stamp: Uint32Array;
 	private epoch = 0;
+	private readonly floodStamp: Uint32Array;
+	private readonly floodQueue: Int32Array;
+	private readonly floodStampB: Uint32Array;
+	private readonly floodQueueB: Int32Array;
+	private floodEpoch = 0;
 	private heapCost: Float64Array = new Float64Array(1024);
 	private heapState: Int32Array = new Int32Array(1024);
 	private heapSize = 0;
@@ -28,6 +41,107 @@ export class GridSearch {
 		this.dist = new Float64Array(states);
 		this.prev = new Int32Array(states);
 		this.stamp = new Uint32Array(states);
+		this.floodStamp = new Uint32Array(grid.nx * grid.ny);
+		this.floodQueue = new Int32Array(grid.nx * grid.ny);
+		this.floodStampB = new Uint32Array(grid.nx * grid.ny);
+		this.floodQueueB = new Int32Array(grid.nx * grid.ny);
+	}
+
+	/** Whether the last fill that found no way ran dry on the sources' side and swept `cell`. */
+	floodedInVain(cell: number): boolean {
+		return this.sourceSideDry && this.floodStamp[cell] === this.floodEpoch;
+	}
+
+	private sourceSideDry = false;
+
+	/** Adds the passable, unseen neighbours of `cell` to one side's queue; true when the sides meet. */
+	private spread(options: {
+		cell: number;
+		net: number;
+		mine: Uint32Array;
+		theirs: Uint32Array | null;
+		target: Uint8Array | null;
+		queue: Int32Array;
+		tail: number;
+	}): number {
+		const { grid } = this;
+		const { cell, net, mine, theirs, target, queue } = options;
+		const mark = this.floodEpoch;
+		let tail = options.tail;
+		const ix = cell % grid.nx;
+		const iy = (cell - ix) / grid.nx;
+		for (let h = 0; h < 4; h++) {
+			const jx = ix + DX[h],
+				jy = iy + DY[h];
+			if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
+			const next = jy * grid.nx + jx;
+			if (mine[next] === mark) continue;
+			if ((target && target[next]) || (theirs && theirs[next] === mark)) return -1;
+			const o = grid.owner[next];
+			if (o !== FREE && o !== net) continue;
+			mine[next] = mark;
+			queue[tail++] = next;
+		}
+		return tail;
+	}
+
+	/**
+	 * Whether some target cell can be reached from the sources through cells passable for `net`.
+	 * With `targetCells` the fill runs from both ends in turn and stops as soon as either side runs
+	 * dry, so a small closed region costs little whichever end it holds.
+	 */
+	reachable(options: {
+		sources: readonly number[];
+		target: Uint8Array;
+		net: number;
+		targetCells?: readonly number[];
+	}): boolean {
+		const { floodStamp: a, floodStampB: b, floodQueue: qa, floodQueueB: qb } = this;
+		const { sources, target, net } = options;
+		const mark = ++this.floodEpoch;
+		this.sourceSideDry = false;
+		let ha = 0,
+			ta = 0,
+			hb = 0,
+			tb = 0;
+		for (const c of sources) {
+			if (a[c] === mark) continue;
+			a[c] = mark;
+			qa[ta++] = c;
+		}
+		const twoSided = options.targetCells !== undefined;
+		for (const c of options.targetCells ?? []) {
+			if (b[c] === mark) continue;
+			b[c] = mark;
+			qb[tb++] = c;
+		}
+		const theirs = twoSided ? b : null;
+		for (;;) {
+			if (ha === ta) {
+				this.sourceSideDry = true;
+				return false;
+			}
+			ta = this.spread({ cell: qa[ha++], net, mine: a, theirs, target, queue: qa, tail: ta });
+			if (ta < 0) return true;
+			if (!twoSided) continue;
+			if (hb === tb) {
+				// The target's region is complete: the sources reach it only through a neighbour in it.
+				for (const c of sources)
+					if (this.spread({ cell: c, net, mine: a, theirs: b, target, queue: qa, tail: 0 }) < 0)
+						return true;
+				return false;
+			}
+			tb = this.spread({
+				cell: qb[hb++],
+				net,
+				mine: b,
+				theirs: a,
+				target: null,
+				queue: qb,
+				tail: tb
+			});
+			if (tb < 0) return true;
+		}
 	}
 
 	private push(cost: number, state: number): void {
@@ -80,9 +194,27 @@ export class GridSearch {
 		net: number;
 		/** Cell-index boxes [ix0, iy0, ix1, iy1] around the targets, for the A* estimate. */
 		boxes: readonly (readonly [number, number, number, number])[];
+		/** The target cells as a list, for a fill from both ends. */
+		targetCells?: readonly number[];
+	}): number[] | null {
+		if (!this.reachable(options)) return null;
+		return (
+			this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS }) ??
+			this.leastCost({ ...options, useCost: false, maxPops: Infinity })
+		);
+	}
+
+	private leastCost(options: {
+		sources: readonly number[];
+		target: Uint8Array;
+		net: number;
+		boxes: readonly (readonly [number, number, number, number])[];
+		useCost: boolean;
+		maxPops: number;
 	}): number[] | null {
 		const { grid } = this;
-		const { sources, target, net, boxes } = options;
+		const { sources, target, net, boxes, useCost } = options;
+		let budget = options.maxPops;
 		const estimate = (cell: number) => {
 			const ix = cell % grid.nx;
 			const iy = (cell - ix) / grid.nx;
@@ -91,7 +223,7 @@ export class GridSearch {
 				const d = Math.max(0, b[0] - ix, ix - b[2]) + Math.max(0, b[1] - iy, iy - b[3]);
 				if (d < best) best = d;
 			}
-			return best === Infinity ? 0 : best;
+			return best === Infinity ? 0 : best * HEURISTIC_WEIGHT;
 		};
 		this.epoch++;
 		this.heapSize = 0;
@@ -106,6 +238,7 @@ export class GridSearch {
 			}
 		}
 		while (this.heapSize > 0) {
+			if (budget-- <= 0) return null;
 			const priority = this.heapCost[0];
 			const state = this.pop();
 			const cell = state >> 2;
@@ -123,7 +256,9 @@ export class GridSearch {
 				const o = grid.owner[next];
 				if (!target[next] && o !== FREE && o !== net) continue;
 				const step =
-					1 + grid.cost[next] + (h === heading || this.prev[state] === -1 ? 0 : BEND_COST);
+					1 +
+					(useCost ? grid.cost[next] : 0) +
+					(h === heading || this.prev[state] === -1 ? 0 : BEND_COST);
 				const ns = next * 4 + h;
 				const nd = cost + step;
 				if (!seen(ns) || nd < this.dist[ns]) {

@@ -1,7 +1,7 @@
 /**
  * Automatic routing of both plates. The common plate goes first: for each common its grown pieces
  * and its transfer point are joined inside the seal's outer edge, preferring to stay out of the
- * viewing area. The segment plate follows: for each segment line its electrodes and pad, and for
+ * viewing area; the commons grow in turn, one join each, so no common walls in the others first. The segment plate follows: for each segment line its electrodes and pad, and for
  * each common its transfer point and pad, on the front glass; a lead over a common-plate conductor
  * inside the seal costs much more, since there it lights a ghost.
  *
@@ -15,7 +15,7 @@ import { glassLayout, type GlassLayout } from './layout';
 import { rectRing } from './rings';
 import { traceRings } from './trace-rings';
 import { RouteGrid } from './route-grid';
-import { routeNet, type Terminal } from './route-net';
+import { growNet, routeNet, type NetRoute, type Terminal } from './route-net';
 import { dotRing, transferPoints } from './transfer-points';
 import { flattenContour } from '../geometry/flatten';
 
@@ -57,15 +57,16 @@ function routeCommonPlate(options: { design: Design; layout: GlassLayout; pieces
 	grid.addCost(rectRing(design.glass.viewingArea), VIEW_COST);
 	const traces: Trace[] = [];
 	const unrouted: Unrouted[] = [];
-	commons.forEach((common, net) => {
+	// The commons grow in turn, one join each, so no common's bus fills the plate first.
+	const growing = commons.flatMap((common, net) => {
 		const mine = pieces.filter((p) => p.common === common);
 		const dot = dots.get(common);
-		if (mine.length === 0 || !dot) return;
+		if (mine.length === 0 || !dot) return [];
 		const terminals: Terminal[] = [
 			{ electrodes: [], ring: dot },
 			...mine.map((p) => ({ electrodes: [p.electrode.id], ring: p.grown[0] }))
 		];
-		const route = routeNet({
+		const steps = growNet({
 			grid,
 			search,
 			net,
@@ -73,7 +74,16 @@ function routeCommonPlate(options: { design: Design; layout: GlassLayout; pieces
 			width_mm: width,
 			clearance_mm: clearance
 		});
-		route.leads.forEach((points, i) =>
+		return [{ common, steps, route: null as NetRoute | null }];
+	});
+	while (growing.some((g) => !g.route))
+		for (const g of growing) {
+			if (g.route) continue;
+			const step = g.steps.next();
+			if (step.done) g.route = step.value;
+		}
+	for (const { common, route } of growing) {
+		route!.leads.forEach((points, i) =>
 			traces.push({
 				id: `tc-${common}-${i + 1}`,
 				plate: 'common',
@@ -82,13 +92,13 @@ function routeCommonPlate(options: { design: Design; layout: GlassLayout; pieces
 				points
 			})
 		);
-		if (route.unreached.length > 0)
+		if (route!.unreached.length > 0)
 			unrouted.push({
 				plate: 'common',
 				net: common,
-				electrodes: route.unreached.flatMap((t) => [...t.electrodes])
+				electrodes: route!.unreached.flatMap((t) => [...t.electrodes])
 			});
-	});
+	}
 	return { traces, unrouted };
 }
 

@@ -1,8 +1,12 @@
 /**
- * Routes one net on a plate: starting from its first terminal (a pad or a transfer point), the
- * nearest unconnected terminal is joined by a least-cost lead, which then becomes part of the
- * connected set, until every terminal is joined or none can be reached (a growing-tree Steiner
- * heuristic, as maze routers use: Lee, IRE Trans. EC-10, 1961, with Dijkstra costs).
+ * Routes one net on a plate as a growing tree (the Steiner heuristic of maze routers: Lee, IRE
+ * Trans. EC-10, 1961, with least-cost searches). The first terminal (a pad or a transfer point) is
+ * the root. While few terminals are pending, one search from the whole tree to all of them joins
+ * the cheapest to reach. With many (a common's back-plate pieces) the pending terminal nearest to
+ * a joined one (Prim's order, Prim, BSTJ 36, 1957, on bounding-box distance) is joined next, by a
+ * search from that terminal to any cell of the tree, leads included, steered towards its nearest
+ * joined neighbour: a small start, so the search stays local. A terminal no search reaches is left
+ * out, with every terminal in the region its search swept, and the others go on.
  *
  * Leads are cell-centre polylines with collinear points dropped; each new lead claims its cells
  * (with the clearance) so later nets keep their distance.
@@ -24,6 +28,8 @@ export interface NetRoute {
 	unreached: Terminal[];
 }
 
+type Box = [number, number, number, number];
+
 function cellsToPolyline(grid: RouteGrid, cells: readonly number[]): XY[] {
 	const pts: XY[] = cells.map((c) => {
 		const ix = c % grid.nx;
@@ -41,73 +47,150 @@ function cellsToPolyline(grid: RouteGrid, cells: readonly number[]): XY[] {
 	return out;
 }
 
-function cellBox(grid: RouteGrid, cells: readonly number[]): [number, number, number, number] {
-	let x0 = Infinity,
-		y0 = Infinity,
-		x1 = -Infinity,
-		y1 = -Infinity;
+function cellBox(grid: RouteGrid, cells: readonly number[]): Box {
+	const box: Box = [Infinity, Infinity, -Infinity, -Infinity];
 	for (const c of cells) {
 		const ix = c % grid.nx;
 		const iy = (c - ix) / grid.nx;
-		x0 = Math.min(x0, ix);
-		x1 = Math.max(x1, ix);
-		y0 = Math.min(y0, iy);
-		y1 = Math.max(y1, iy);
+		box[0] = Math.min(box[0], ix);
+		box[2] = Math.max(box[2], ix);
+		box[1] = Math.min(box[1], iy);
+		box[3] = Math.max(box[3], iy);
 	}
-	return [x0, y0, x1, y1];
+	return box;
 }
 
-export function routeNet(options: {
+/** Up to this many pending terminals, one search from the tree looks for all of them at once. */
+const FEW_TERMINALS = 8;
+
+const boxGap = (a: Box, b: Box): number =>
+	Math.max(0, a[0] - b[2], b[0] - a[2]) + Math.max(0, a[1] - b[3], b[1] - a[3]);
+
+export interface NetOptions {
 	grid: RouteGrid;
 	search: GridSearch;
 	net: number;
 	terminals: readonly Terminal[];
 	width_mm: number;
 	clearance_mm: number;
-}): NetRoute {
+}
+
+/** Routes the whole net at once. */
+export function routeNet(options: NetOptions): NetRoute {
+	const steps = growNet(options);
+	for (;;) {
+		const step = steps.next();
+		if (step.done) return step.value;
+	}
+}
+
+/**
+ * Routes the net one join at a time: each `next()` joins (or gives up on) one terminal, so several
+ * nets can grow in turn and none spreads over the plate before the others have their first leads.
+ */
+export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	const { grid, search, net, terminals, width_mm, clearance_mm } = options;
 	const leads: XY[][] = [];
-	if (terminals.length === 0) return { leads, unreached: [] };
+	const unreached: Terminal[] = [];
+	if (terminals.length === 0) return { leads, unreached };
 	const inTree = new Uint8Array(grid.nx * grid.ny);
-	const target = new Uint8Array(grid.nx * grid.ny);
-	const owners = new Int32Array(grid.nx * grid.ny).fill(-1);
+	const treeCells: number[] = [];
+	const terminalAt = new Map<number, number[]>();
 	const cellsOf = terminals.map((t) => grid.cellsInside(t.ring));
-	const sources: number[] = [];
+	cellsOf.forEach((cells, t) =>
+		cells.forEach((c) => {
+			const list = terminalAt.get(c);
+			if (list) list.push(t);
+			else terminalAt.set(c, [t]);
+		})
+	);
+	const boxes = cellsOf.map((cells) => cellBox(grid, cells));
+	const pending = new Set<number>();
+	const nearest = terminals.map(() => ({ gap: Infinity, to: 0 }));
+	const touched: number[] = [];
 	const join = (cells: readonly number[]) => {
 		for (const c of cells) {
-			if (!inTree[c]) sources.push(c);
+			if (inTree[c]) continue;
 			inTree[c] = 1;
+			treeCells.push(c);
+			for (const t of terminalAt.get(c) ?? []) if (pending.has(t)) touched.push(t);
 		}
 	};
-	join(cellsOf[0]);
-	const pending = new Set<number>();
-	for (let t = 1; t < terminals.length; t++) {
-		pending.add(t);
-		for (const c of cellsOf[t]) {
-			target[c] = 1;
-			owners[c] = t;
-		}
-	}
 	const reach = (t: number) => {
 		pending.delete(t);
-		for (const c of cellsOf[t]) target[c] = 0;
 		join(cellsOf[t]);
-	};
-	while (pending.size > 0) {
-		const overlapping = [...pending].find((t) => cellsOf[t].some((c) => inTree[c]));
-		if (overlapping !== undefined) {
-			reach(overlapping);
-			continue;
+		for (const p of pending) {
+			const gap = boxGap(boxes[p], boxes[t]);
+			if (gap < nearest[p].gap) nearest[p] = { gap, to: t };
 		}
-		const boxes = [...pending].map((t) => cellBox(grid, cellsOf[t]));
-		const cells = search.search({ sources, target, net, boxes });
-		if (!cells) break;
+	};
+	const layLead = (cells: readonly number[]) => {
 		const lead = cellsToPolyline(grid, cells);
 		leads.push(lead);
 		for (let i = 1; i < lead.length; i++)
 			grid.claim(leadRing({ a: lead[i - 1], b: lead[i], width_mm }), net, clearance_mm);
 		join(cells);
-		reach(owners[cells[cells.length - 1]]);
+	};
+	for (let t = 1; t < terminals.length; t++) pending.add(t);
+	reach(0);
+	while (pending.size > 0) {
+		const t = touched.pop();
+		if (t !== undefined) {
+			if (pending.has(t)) reach(t);
+			continue;
+		}
+		if (pending.size <= FEW_TERMINALS) {
+			// Few terminals: search from the whole tree to all of them and take the cheapest reached.
+			const targets = new Uint8Array(grid.nx * grid.ny);
+			const targetCells: number[] = [];
+			for (const p of pending)
+				for (const c of cellsOf[p]) {
+					targets[c] = 1;
+					targetCells.push(c);
+				}
+			const cells = search.search({
+				sources: treeCells,
+				target: targets,
+				targetCells,
+				net,
+				boxes: [...pending].map((p) => boxes[p])
+			});
+			if (!cells) {
+				for (const p of pending) unreached.push(terminals[p]);
+				pending.clear();
+				yield;
+				continue;
+			}
+			layLead(cells);
+			const end = cells[cells.length - 1];
+			const hit = (terminalAt.get(end) ?? []).find((p) => pending.has(p));
+			if (hit !== undefined) reach(hit);
+			yield;
+			continue;
+		}
+		let next = -1;
+		for (const p of pending) if (next < 0 || nearest[p].gap < nearest[next].gap) next = p;
+		const cells = search.search({
+			sources: cellsOf[next],
+			target: inTree,
+			targetCells: treeCells,
+			net,
+			boxes: [boxes[nearest[next].to]]
+		});
+		if (!cells) {
+			// The net's passable cells only shrink as leads are laid, so every terminal in the region
+			// the failed search swept stays cut off from the tree as well.
+			for (const p of [...pending])
+				if (p === next || cellsOf[p].some((c) => search.floodedInVain(c))) {
+					pending.delete(p);
+					unreached.push(terminals[p]);
+				}
+			yield;
+			continue;
+		}
+		layLead(cells);
+		reach(next);
+		yield;
 	}
-	return { leads, unreached: [...pending].map((t) => terminals[t]) };
+	return { leads, unreached };
 }

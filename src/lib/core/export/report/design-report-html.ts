@@ -61,7 +61,8 @@ export function designReportHtml(options: {
 }): string {
 	const { design, report } = options;
 	const glass = options.glass ?? checkGlass(design);
-	const findings = reportFindings(report, [...glass.findings, ...(options.findings ?? [])]);
+	// The glass check joins the findings once the design has a glass drawing, as in `check`.
+	const findings = reportFindings(report, options.findings ?? []);
 	const byName = new Map(design.electrodes.map((e) => [e.id, e.name || e.id]));
 	const body = [
 		header(design, report, options),

@@ -2,6 +2,7 @@
  * The report's glass section: outline and viewing area, seal, contact ledge, pad count, back-plate
  * count and the ghosts (front/back ITO overlaps) with where they lie. Millimetres and mm².
  */
+import { hasGlassDrawing } from '../../glass/glass-in-check';
 import type { Design } from '../../design/schema';
 import type { GlassReport } from '../../glass/check-glass';
 import { fixed, htmlTable } from './html-text';
@@ -31,9 +32,15 @@ export function glassSection(options: { design: Design; glass: GlassReport }): s
 			],
 			['Pads', `${layout.pads.length} at ${fixed(design.pinout.pitch_mm, 2)} mm pitch`],
 			['Back plates', `${plates} on ${glass.artwork.common.length} commons`],
-			['Ghosts', String(glass.ghosts.length)]
+			['Leads', String(design.glassArt.traces.length)],
+			['Ghosts', hasGlassDrawing(design) ? String(glass.ghosts.length) : '—']
 		]
 	});
+	if (!hasGlassDrawing(design))
+		return (
+			summary +
+			'<p>No leads or transfer points yet: the glass check (opens, shorts, ghosts) starts once they are generated or drawn.</p>'
+		);
 	if (glass.ghosts.length === 0) return summary;
 	const ghosts = htmlTable({
 		head: ['Ghosts', 'Common × segment line', 'Count', 'Area (mm²)'],
