@@ -4,13 +4,18 @@
  * drawing changed while it was routed is set aside instead of overwriting the newer edit.
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { GlassPlanning, type GlassWorkerLike } from '../../src/lib/state/glass-planning.svelte';
+import {
+	GlassPlanning,
+	tracesKey,
+	type GlassWorkerLike
+} from '../../src/lib/state/glass-planning.svelte';
 import type {
 	GlassPlanRequest,
 	GlassPlanResponse
 } from '../../src/lib/workers/glass-plan-protocol';
 import { answerGlassPlan } from '../../src/lib/workers/glass-plan-job';
-import { applyPatch, type Patch } from '../../src/lib/core/commands/patch';
+import type { Patch } from '../../src/lib/core/commands/patch';
+import { History } from '../../src/lib/core/commands/history';
 import { moveElectrodes } from '../../src/lib/core/commands/move-electrodes';
 import type { Design } from '../../src/lib/core/design/schema';
 import { testDesign } from '../commands/fixtures';
@@ -37,8 +42,10 @@ describe('glass generation in a worker', () => {
 	let design: Design;
 	let steps: string[];
 	let planning: GlassPlanning;
+	let history: History;
 	const edit = (command: (d: Design) => Patch) => {
-		design = applyPatch(design, command(design));
+		history.apply(command(history.design), 'Move');
+		design = history.design;
 	};
 
 	beforeEach(() => {
@@ -46,6 +53,7 @@ describe('glass generation in a worker', () => {
 		workers = [];
 		steps = [];
 		design = testDesign();
+		history = new History(design);
 		planning = new GlassPlanning({
 			createWorker: () => {
 				const w = new HeldWorker();
@@ -54,9 +62,9 @@ describe('glass generation in a worker', () => {
 			},
 			apply: (label, command) => {
 				try {
-					const patch = command(design);
-					design = applyPatch(design, patch);
-					steps.push(label);
+					const patch = command(history.design);
+					if (history.apply(patch, label)) steps.push(label);
+					design = history.design;
 					return { ok: true, patch };
 				} catch (error) {
 					return { ok: false, message: (error as Error).message };
@@ -86,6 +94,14 @@ describe('glass generation in a worker', () => {
 		const expected = answerGlassPlan({ id: 0, design: testDesign() });
 		if (expected.kind !== 'result') throw new Error('the reference plan failed');
 		expect(design.glassArt.traces).toEqual(expected.plan.traces);
+		expect(planning.findings).toEqual(expected.findings);
+		expect(planning.appliedTraces).toBe(tracesKey(design.glassArt.traces));
+		expect(planning.notice).toBeNull();
+		// the same drawing routed again gives the same traces: nothing to undo, and said so
+		planning.generate(design);
+		workers[0].answer();
+		expect(steps).toHaveLength(1);
+		expect(planning.notice).toMatch(/nothing changed/);
 		expect(planning.findings).toEqual(expected.findings);
 	});
 

@@ -7,9 +7,11 @@
  * meanwhile. `busy` is true from the request until its answer has been applied or refused.
  */
 import type { Design } from '$lib/core/design/schema';
+import type { Trace } from '$lib/core/design/glass-art-schema';
 import type { Finding } from '$lib/core/findings/finding';
 import { applyGlassPlan, glassPlanInputs } from '$lib/core/commands/apply-glass-plan';
 import type { Patch } from '$lib/core/commands/patch';
+import { isNoopPatch } from '$lib/core/commands/patch-algebra';
 import type { GlassPlanRequest, GlassPlanResponse } from '$lib/workers/glass-plan-protocol';
 import { createGlassPlanWorker } from '$lib/workers/create-glass-plan-worker';
 import type { EditOutcome } from './edit-session.svelte';
@@ -24,14 +26,22 @@ export type ApplyEdit = (label: string, command: (design: Design) => Patch) => E
 
 export const GENERATE_LABEL = 'Generate plates and traces';
 
+/** The course of every trace, as one comparable string. */
+export const tracesKey = (traces: readonly Trace[]): string =>
+	JSON.stringify(
+		traces.map((t) => [t.id, t.plate, t.net, t.width_mm, t.points.map((p) => [p.x, p.y])])
+	);
+
 export class GlassPlanning {
 	busy = $state(false);
 	/** Why the last request gave nothing: the worker failed, or the drawing changed meanwhile. */
 	error = $state<string | null>(null);
 	/** The routing's own findings (leads that found no path) for the plan last applied. */
 	findings = $state.raw<Finding[]>([]);
-	/** The traces that plan put into the design: its findings hold while these are in place. */
-	appliedTraces = $state.raw<readonly unknown[] | null>(null);
+	/** The traces that plan put into the design (`tracesKey`): its findings hold while they stay. */
+	appliedTraces = $state<string | null>(null);
+	/** A word on the last plan applied, e.g. that it changed nothing. */
+	notice = $state<string | null>(null);
 	elapsed_ms = $state(0);
 	/** Time since the running request started, refreshed while busy. */
 	running_ms = $state(0);
@@ -71,6 +81,7 @@ export class GlassPlanning {
 		this.#madeFrom = glassPlanInputs(snapshot);
 		const message: GlassPlanRequest = { id: ++this.#latest, design: snapshot };
 		this.error = null;
+		this.notice = null;
 		this.busy = true;
 		this.#started_ms = performance.now();
 		this.running_ms = 0;
@@ -120,7 +131,9 @@ export class GlassPlanning {
 		);
 		if (outcome.ok) {
 			this.findings = message.findings;
-			this.appliedTraces = outcome.patch.fields?.glassArt?.[1]?.traces ?? null;
+			this.appliedTraces = tracesKey(message.plan.traces);
+			if (isNoopPatch(outcome.patch))
+				this.notice = 'The routed plates and traces match the drawing already: nothing changed.';
 		} else this.error = `Nothing applied: ${outcome.message}. Generate again.`;
 	}
 }
