@@ -130,3 +130,20 @@ test('a trace point dragged by hand changes the glass check, and Ctrl+Z takes it
 	await expect(count).toHaveText(before);
 	await expect(page.getByTestId('status')).toContainText('Nothing to undo');
 });
+
+test('clicking a ghost finding shows the plates, zooms to it and picks the lead causing it', async ({
+	page
+}) => {
+	await openGlassTab(page);
+	await expect(page.getByTestId('glass-show-plates')).not.toBeChecked();
+	const zoom = await page.getByTestId('editor-stage').getAttribute('data-view');
+	await page
+		.getByTestId('glass-verdict')
+		.locator('li[data-code="glass.ghost-visible"] button')
+		.first()
+		.click();
+	await expect(page.getByTestId('glass-show-plates')).toBeChecked();
+	await expect(page.getByTestId('editor-stage')).toHaveAttribute('data-tool', 'points');
+	await expect(page.getByTestId('tool-options')).toContainText(/[1-9]\d* points? selected/);
+	await expect(page.getByTestId('editor-stage')).not.toHaveAttribute('data-view', zoom!);
+});
