@@ -45,7 +45,7 @@ export interface EditorPort {
 	readonly snapToShapes: boolean;
 	readonly cornerRadius_mm: number;
 	readonly polygonSides: number;
-	readonly layers: { electrodes: boolean };
+	readonly layers: { electrodes: boolean; plates?: boolean };
 	setOverlay(patch: Partial<Overlay>): void;
 	clearOverlay(): void;
 }
@@ -103,6 +103,10 @@ export class EditorContext implements ToolContext {
 			cornerRadius_mm: this.#editor.cornerRadius_mm,
 			polygonSides: this.#editor.polygonSides
 		};
+	}
+
+	get tracesEditable() {
+		return this.#editor.layers.plates === true;
 	}
 
 	hit(point: XY): string | null {

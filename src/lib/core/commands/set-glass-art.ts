@@ -9,7 +9,8 @@ import { CommandError } from './command-error';
 import { editDesign } from './design-draft';
 import type { Patch } from './patch';
 
-function checked(next: GlassArt): GlassArt {
+/** The glass drawing as the document schema accepts it, or a CommandError naming the field. */
+export function checkedGlassArt(next: GlassArt): GlassArt {
 	const parsed = glassArtSchema.safeParse(next);
 	if (!parsed.success) {
 		const issue = parsed.error.issues[0];
@@ -22,7 +23,7 @@ export function setGlassArt(
 	design: Design,
 	changes: Partial<Pick<GlassArt, 'seal' | 'ledge' | 'overlapMargin_mm' | 'traceWidth_mm'>>
 ): Patch {
-	const next = checked({ ...design.glassArt, ...changes });
+	const next = checkedGlassArt({ ...design.glassArt, ...changes });
 	return editDesign(design, (draft) => draft.setField('glassArt', next));
 }
 
@@ -33,7 +34,7 @@ export function setTracePoints(
 	const traces = design.glassArt.traces;
 	const index = traces.findIndex((t) => t.id === args.id);
 	if (index < 0) throw new CommandError(`no trace "${args.id}"`);
-	const next = checked({
+	const next = checkedGlassArt({
 		...design.glassArt,
 		traces: traces.map((t, i) => (i === index ? { ...t, points: args.points } : t))
 	});
@@ -43,6 +44,6 @@ export function setTracePoints(
 export function addTrace(design: Design, trace: Trace): Patch {
 	if (design.glassArt.traces.some((t) => t.id === trace.id))
 		throw new CommandError(`a trace "${trace.id}" exists already`);
-	const next = checked({ ...design.glassArt, traces: [...design.glassArt.traces, trace] });
+	const next = checkedGlassArt({ ...design.glassArt, traces: [...design.glassArt.traces, trace] });
 	return editDesign(design, (draft) => draft.setField('glassArt', next));
 }

@@ -10,6 +10,8 @@ import type { XY } from '$lib/core/geometry/vec';
 import type { Overlay } from '../overlay';
 import { HANDLE_SIZE_px, SIZE_HANDLES, sizeHandlePoint, turnHandlePoint } from '../handles';
 import { contoursOf, nodeKey } from '../node-refs';
+import { traceNodeKey } from '../trace-nodes';
+import type { Trace } from '$lib/core/design/glass-art-schema';
 import type { PaperScene } from './paper-scene';
 
 export const OVERLAY_COLOURS = {
@@ -28,6 +30,8 @@ export interface OverlayScene {
 		electrodes: readonly Electrode[];
 		selected: ReadonlySet<string>;
 		withHandles: ReadonlySet<string>;
+		/** Traces being edited (a point of theirs is selected): centre line and points shown. */
+		traces?: readonly Trace[];
 	} | null;
 }
 
@@ -139,6 +143,14 @@ function drawNodes(nodes: NonNullable<OverlayScene['nodes']>, draw: Draw): void 
 				const on = nodes.selected.has(key);
 				draw.square(p, on ? 8 : 7, on ? OVERLAY_COLOURS.frame : '#ffffff', OVERLAY_COLOURS.frame);
 			});
+		});
+	}
+	for (const t of nodes.traces ?? []) {
+		for (let i = 0; i + 1 < t.points.length; i++)
+			draw.line(t.points[i], t.points[i + 1], OVERLAY_COLOURS.frame, [3, 2]);
+		t.points.forEach((p, index) => {
+			const on = nodes.selected.has(traceNodeKey({ traceId: t.id, index }));
+			draw.circle(p, on ? 4.5 : 4, on ? OVERLAY_COLOURS.frame : '#ffffff', OVERLAY_COLOURS.frame);
 		});
 	}
 }

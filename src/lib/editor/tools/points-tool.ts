@@ -4,6 +4,10 @@
  * empty glass to box-select points, double-click an edge to add a point there, double-click a
  * point to switch it between corner and smooth, Delete removes the selected points.
  *
+ * While the glass drawing's traces are on show, their points are nodes too: click a trace to pick
+ * it (all its points), drag its points, double-click it to add a point; Delete removes the picked
+ * points, and a trace left with fewer than two points is removed whole.
+ *
  * Idle ─down→ Pointing ─move→ MovingPoints | MovingHandle | Boxing ─up→ Idle; Escape bails.
  */
 import type { XY } from '$lib/core/geometry/vec';
@@ -21,7 +25,17 @@ import {
 	type NodeRef,
 	type NodeTarget
 } from '../node-refs';
-import { deleteNodes, moveNodes, toggleNodesSmooth } from '../node-edits';
+import { deleteNodeKeys, moveNodeKeys, toggleNodesSmooth } from '../node-edits';
+import { insertTracePoint } from '$lib/core/commands/insert-trace-point';
+import {
+	activeTraces,
+	allTraceNodeKeys,
+	traceEdgeAt,
+	traceNodeAt,
+	traceNodeKey,
+	traceNodePosition,
+	type TraceNodeRef
+} from '../trace-nodes';
 import { rectFromCorners } from '../overlay';
 import {
 	movedBeyondThreshold,
@@ -33,8 +47,16 @@ import {
 
 type State =
 	| { name: 'idle' }
-	| { name: 'pointing'; start: XY; target: NodeTarget | null; shift: boolean; wasSelected: boolean }
-	| { name: 'movingPoints'; start: XY; anchor: XY; refs: NodeRef[]; ignore: ReadonlySet<string> }
+	| {
+			name: 'pointing';
+			start: XY;
+			target: NodeTarget | null;
+			/** A trace point under the press, when no electrode node was. */
+			trace: TraceNodeRef | null;
+			shift: boolean;
+			wasSelected: boolean;
+	  }
+	| { name: 'movingPoints'; start: XY; anchor: XY; keys: string[]; ignore: ReadonlySet<string> }
 	| { name: 'movingHandle'; target: NodeTarget; point: XY; alt: boolean }
 	| { name: 'boxing'; start: XY; shift: boolean };
 
@@ -65,10 +87,18 @@ export class PointsTool implements Tool {
 			this.#drag(ctx, input);
 			return;
 		}
-		if (s.name === 'pointing' && s.target?.part === 'point' && s.shift && s.wasSelected) {
-			const key = nodeKey(s.target);
+		const pressedKey =
+			s.name !== 'pointing'
+				? null
+				: s.target?.part === 'point'
+					? nodeKey(s.target)
+					: s.trace
+						? traceNodeKey(s.trace)
+						: null;
+		if (s.name === 'pointing' && pressedKey && s.shift && s.wasSelected) {
+			const key = pressedKey;
 			ctx.setNodeSelection([...ctx.nodeSelection].filter((k) => k !== key));
-		} else if (s.name === 'pointing' && !s.target && !s.shift) {
+		} else if (s.name === 'pointing' && !s.target && !s.trace && !s.shift) {
 			ctx.setNodeSelection([]);
 		} else if (s.name === 'movingPoints' || s.name === 'movingHandle') {
 			ctx.commit();
@@ -82,6 +112,11 @@ export class PointsTool implements Tool {
 							inside.push(nodeKey({ electrodeId: e.id, contour: ci, index: pi }));
 					})
 				);
+			for (const t of activeTraces(ctx.design, ctx.nodeSelection))
+				t.points.forEach((p, index) => {
+					if (p.x >= rect.minX && p.x <= rect.maxX && p.y >= rect.minY && p.y <= rect.maxY)
+						inside.push(traceNodeKey({ traceId: t.id, index }));
+				});
 			ctx.setNodeSelection(s.shift ? [...ctx.nodeSelection, ...inside] : inside);
 		}
 		ctx.clearOverlay();
@@ -102,11 +137,16 @@ export class PointsTool implements Tool {
 			return;
 		}
 		if (!target && input.clicks >= 2 && this.#insertOnEdge(ctx, editable, input.point)) return;
+		const reach_mm = REACH_px / ctx.scale_px_per_mm;
+		const traces = ctx.tracesEditable ? ctx.design.glassArt.traces : [];
+		const trace = target ? null : traceNodeAt({ traces, at: input.point, reach_mm });
+		if (!target && !trace && input.clicks >= 2 && this.#insertOnTrace(ctx, input.point)) return;
 		let wasSelected = false;
-		if (target?.part === 'point') {
-			const key = nodeKey(target);
-			wasSelected = ctx.nodeSelection.has(key);
-			if (!wasSelected) ctx.setNodeSelection(input.shift ? [...ctx.nodeSelection, key] : [key]);
+		const pressed = target?.part === 'point' ? nodeKey(target) : trace ? traceNodeKey(trace) : null;
+		if (pressed) {
+			wasSelected = ctx.nodeSelection.has(pressed);
+			if (!wasSelected)
+				ctx.setNodeSelection(input.shift ? [...ctx.nodeSelection, pressed] : [pressed]);
 		} else if (!target) {
 			const hitId = ctx.hit(input.point);
 			if (hitId && !ctx.selection.has(hitId)) {
@@ -114,8 +154,21 @@ export class PointsTool implements Tool {
 				ctx.setNodeSelection([]);
 				return;
 			}
+			const body = hitId ? null : traceEdgeAt({ traces, at: input.point, reach_mm });
+			if (body) {
+				const whole = allTraceNodeKeys(traces.find((t) => t.id === body.traceId)!);
+				ctx.setNodeSelection(input.shift ? [...ctx.nodeSelection, ...whole] : whole);
+				return;
+			}
 		}
-		this.#state = { name: 'pointing', start: input.point, target, shift: input.shift, wasSelected };
+		this.#state = {
+			name: 'pointing',
+			start: input.point,
+			target,
+			trace,
+			shift: input.shift,
+			wasSelected
+		};
 	}
 
 	#insertOnEdge(ctx: ToolContext, editable: readonly Electrode[], at: XY): boolean {
@@ -142,8 +195,27 @@ export class PointsTool implements Tool {
 		return false;
 	}
 
+	/** A double click on a picked trace's body adds a point there and selects it. */
+	#insertOnTrace(ctx: ToolContext, at: XY): boolean {
+		const hit = traceEdgeAt({
+			traces: activeTraces(ctx.design, ctx.nodeSelection),
+			at,
+			reach_mm: REACH_px / ctx.scale_px_per_mm
+		});
+		if (!hit || !(hit.t > 1e-6 && hit.t < 1 - 1e-6)) return false;
+		if (ctx.run('Add trace point', (d) => insertTracePoint(d, hit)))
+			ctx.setNodeSelection([traceNodeKey({ traceId: hit.traceId, index: hit.edgeIndex + 1 })]);
+		return true;
+	}
+
 	#startDrag(ctx: ToolContext, s: Extract<State, { name: 'pointing' }>) {
 		const t = s.target;
+		if (!t && s.trace) {
+			const anchor = traceNodePosition(ctx.design, s.trace);
+			if (!anchor) return;
+			this.#startMoving(ctx, s.start, anchor);
+			return;
+		}
 		if (!t) {
 			this.#state = { name: 'boxing', start: s.start, shift: s.shift };
 			return;
@@ -152,20 +224,26 @@ export class PointsTool implements Tool {
 		const at = e ? nodePosition(e, t) : null;
 		if (!e || !at) return;
 		if (t.part === 'point') {
-			const refs = [...ctx.nodeSelection].map(parseNodeKey).filter((r): r is NodeRef => r !== null);
-			ctx.begin(refs.length > 1 ? 'Move points' : 'Move point');
-			this.#state = {
-				name: 'movingPoints',
-				start: s.start,
-				anchor: at,
-				refs,
-				ignore: new Set(refs.map((r) => r.electrodeId))
-			};
+			this.#startMoving(ctx, s.start, at);
 		} else {
 			const point = nodePosition(e, { ...t, part: 'point' })!;
 			ctx.begin('Move handle');
 			this.#state = { name: 'movingHandle', target: t, point, alt: false };
 		}
+	}
+
+	/** Starts moving every selected node, electrode and trace points alike. */
+	#startMoving(ctx: ToolContext, start: XY, anchor: XY) {
+		const keys = [...ctx.nodeSelection];
+		const refs = keys.map(parseNodeKey).filter((r): r is NodeRef => r !== null);
+		ctx.begin(keys.length > 1 ? 'Move points' : 'Move point');
+		this.#state = {
+			name: 'movingPoints',
+			start,
+			anchor,
+			keys,
+			ignore: new Set(refs.map((r) => r.electrodeId))
+		};
 	}
 
 	#drag(ctx: ToolContext, input: PointerInput) {
@@ -178,7 +256,7 @@ export class PointsTool implements Tool {
 			const to = ctx.snap(raw, { from: s.anchor, angle: input.shift, ignore: s.ignore });
 			const dx_mm = to.x - s.anchor.x;
 			const dy_mm = to.y - s.anchor.y;
-			ctx.preview((start) => moveNodes(start, { refs: s.refs, dx_mm, dy_mm }));
+			ctx.preview((start) => moveNodeKeys(start, { keys: s.keys, dx_mm, dy_mm }));
 			ctx.overlay({
 				readout: { at: input.point, text: `${to.x.toFixed(3)}, ${to.y.toFixed(3)} mm` }
 			});
@@ -205,9 +283,11 @@ export class PointsTool implements Tool {
 
 	key(ctx: ToolContext, input: KeyInput): boolean {
 		if ((input.key === 'Delete' || input.key === 'Backspace') && ctx.nodeSelection.size > 0) {
-			const refs = [...ctx.nodeSelection].map(parseNodeKey).filter((r): r is NodeRef => r !== null);
+			const keys = [...ctx.nodeSelection];
 			if (
-				ctx.run(refs.length > 1 ? 'Delete points' : 'Delete point', (d) => deleteNodes(d, { refs }))
+				ctx.run(keys.length > 1 ? 'Delete points' : 'Delete point', (d) =>
+					deleteNodeKeys(d, { keys })
+				)
 			)
 				ctx.setNodeSelection([]);
 			return true;

@@ -25,7 +25,7 @@ export const TOOLS: readonly ToolInfo[] = [
 		id: 'points',
 		name: 'Points',
 		key: '2',
-		hint: 'Drag points and handles; double-click an edge to add a point; Delete removes points'
+		hint: 'Drag points and handles; double-click an edge to add a point; Delete removes points; with plates shown, click a trace to edit it'
 	},
 	{
 		id: 'turn',

@@ -46,6 +46,8 @@ export interface ToolContext {
 	setNodeSelection(keys: Iterable<string>): void;
 	readonly scale_px_per_mm: number;
 	readonly options: { cornerRadius_mm: number; polygonSides: number };
+	/** The glass drawing's traces are on show, so their points can be picked and edited. */
+	readonly tracesEditable: boolean;
 	/** The topmost electrode under the point, or null. */
 	hit(point: XY): string | null;
 	/** Electrodes inside ('contains') or touching ('intersects') a rectangle, in draw order. */
