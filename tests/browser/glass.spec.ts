@@ -11,6 +11,8 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { parseDesignText } from '../../src/lib/core/design/parse-design';
+import { planGlass } from '../../src/lib/core/glass/plan-glass';
 
 async function openGlassTab(page: Page) {
 	await page.goto('/');
@@ -18,6 +20,22 @@ async function openGlassTab(page: Page) {
 	await expect(page.locator('[data-hydrated="true"]')).toBeVisible({ timeout: 30_000 });
 	await page.getByTestId('view-glass').click();
 	await expect(page.getByTestId('glass-panel')).toBeVisible();
+}
+
+/** Routes the demo's plates and traces in the app and waits for the one undoable step. */
+async function generateInApp(page: Page) {
+	await page.getByTestId('glass-generate').click();
+	await expect(page.getByTestId('status')).toContainText('Undo: Generate plates and traces', {
+		timeout: 90_000
+	});
+	await expect(page.getByTestId('glass-plan')).toHaveAttribute('data-state', 'idle');
+}
+
+/** The routing the app's worker computes for the demo (the same core function, deterministic). */
+function demoPlan() {
+	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
+	if (!parsed.ok) throw new Error('the demo design does not parse');
+	return { design: parsed.design, plan: planGlass(parsed.design) };
 }
 
 /** Counts pixels resvg paints (alpha > 0) in an SVG rendered 800 px wide. */
@@ -97,13 +115,22 @@ test('routes plates and traces off the main thread, exports SVG that renders and
 test('a trace point dragged by hand changes the glass check, and Ctrl+Z takes it back', async ({
 	page
 }) => {
+	test.setTimeout(150_000);
+	const { design, plan } = demoPlan();
+	const seg1 = design.segmentLines.find((l) => l.name === 'SEG1')!;
+	const lead = plan.glassArt.traces.find(
+		(t) => t.plate === 'segment' && t.net === seg1.id && t.points.length >= 3
+	)!;
+	expect(lead).toBeDefined();
+	const corner = lead.points[1];
 	await openGlassTab(page);
+	await generateInApp(page);
 	await page.getByTestId('glass-show-plates').check();
 	await page.getByTestId('tool-points').click();
 	const count = page.getByTestId('glass-trace-count');
 	const before = (await count.textContent())!;
 
-	// the demo's lead of SEG1 turns at (13.425, 29.325) mm below the digits
+	// a corner of SEG1's lead, dragged into the middle of the digits
 	const stage = page.getByTestId('editor-stage');
 	const [scale, offsetX, offsetY] = (await stage.getAttribute('data-view'))!.split(' ').map(Number);
 	const box = (await stage.boundingBox())!;
@@ -111,7 +138,7 @@ test('a trace point dragged by hand changes the glass check, and Ctrl+Z takes it
 		x: box.x + offsetX + x_mm * scale,
 		y: box.y + offsetY + y_mm * scale
 	});
-	const from = at(13.425, 29.325);
+	const from = at(corner.x, corner.y);
 	const to = at(22, 17);
 	await page.mouse.move(from.x, from.y);
 	await page.mouse.down();
@@ -128,13 +155,17 @@ test('a trace point dragged by hand changes the glass check, and Ctrl+Z takes it
 
 	await page.keyboard.press('Control+z');
 	await expect(count).toHaveText(before);
-	await expect(page.getByTestId('status')).toContainText('Nothing to undo');
+	await expect(page.getByTestId('status')).toContainText('Undo: Generate plates and traces');
 });
 
 test('clicking a ghost finding shows the plates, zooms to it and picks the lead causing it', async ({
 	page
 }) => {
+	test.setTimeout(150_000);
 	await openGlassTab(page);
+	await generateInApp(page);
+	// Generating shows the plates; hide them to see the finding bring them back.
+	await page.getByTestId('glass-show-plates').uncheck();
 	await expect(page.getByTestId('glass-show-plates')).not.toBeChecked();
 	const zoom = await page.getByTestId('editor-stage').getAttribute('data-view');
 	await page
