@@ -15,7 +15,8 @@ import { planGlass } from '../../src/lib/core/glass/plan-glass';
 import { glassExportFiles } from '../../src/lib/core/export/glass-export';
 import { signedArea } from '../../src/lib/core/geometry/polygon';
 import { expectWithin } from '../helpers/tolerance';
-import { electrode, emptyDesign } from '../commands/fixtures';
+import { electrode } from '../commands/fixtures';
+import { twoElectrodeGlass } from './fixture';
 
 const rect = (x: number, y: number, w: number, h: number) => [
 	{ x, y },
@@ -24,29 +25,7 @@ const rect = (x: number, y: number, w: number, h: number) => [
 	{ x, y: y + h }
 ];
 
-/** Glass 30 × 20 mm, ledge at the bottom; E1 (COM1, SEG1) and E2 (COM2, SEG2), 5 mm apart. */
-function twoElectrodes(): Design {
-	return {
-		...emptyDesign(),
-		glass: {
-			width_mm: 30,
-			height_mm: 20,
-			viewingArea: { x_mm: 3, y_mm: 3, width_mm: 24, height_mm: 11 }
-		},
-		commons: [
-			{ id: 'com1', name: 'COM1' },
-			{ id: 'com2', name: 'COM2' }
-		],
-		segmentLines: [
-			{ id: 'seg1', name: 'SEG1' },
-			{ id: 'seg2', name: 'SEG2' }
-		],
-		electrodes: [
-			electrode('e1', rect(5, 5, 5, 3), { common: 'com1', line: 'seg1' }),
-			electrode('e2', rect(15, 5, 5, 3), { common: 'com2', line: 'seg2' })
-		]
-	};
-}
+const twoElectrodes = twoElectrodeGlass;
 
 const codes = (d: Design) => checkGlass(d).findings.map((f) => f.code);
 
