@@ -80,6 +80,19 @@ export function continuationLadder(cell: DirectorCell, voltage_V: number): numbe
 	return ladder;
 }
 
+/**
+ * The ladder's rungs strictly between two voltages, in the direction of travel, then the target:
+ * a jump from a solved state to a far voltage is walked in the same steps as a solve from 0 V,
+ * so a large jump cannot strand the Newton iteration on the way (a monotone path keeps the branch).
+ */
+export function ladderBetween(cell: DirectorCell, from_V: number, to_V: number): number[] {
+	const low = Math.min(from_V, to_V);
+	const high = Math.max(from_V, to_V);
+	const rungs = continuationLadder(cell, high).filter((v) => v > low && v < high);
+	if (to_V < from_V) rungs.reverse();
+	return [...rungs, to_V];
+}
+
 /** Solve on a workspace along a list of voltages, warm-starting each from the previous state. */
 export function solveAlong(options: {
 	ws: DirectorWorkspace;

@@ -3,7 +3,7 @@
  *
  * The first voltage is reached from 0 V through the threshold-scaled ladder of director.ts (or
  * from `start` when given); every later voltage is warm-started from the previous solution, in the
- * order given. Order therefore matters only for hysteretic (high-twist) cells: sweep upwards for
+ * order given, walking the ladder's rungs between the two (ladderBetween). Order therefore matters only for hysteretic (high-twist) cells: sweep upwards for
  * the switching branch, downwards for the relaxing one. One workspace serves the whole sweep.
  */
 import type { DirectorCell } from './cell';
@@ -12,6 +12,7 @@ import {
 	checkCell,
 	checkVoltage,
 	continuationLadder,
+	ladderBetween,
 	resolveSettings,
 	solveAlong,
 	type DirectorSettings
@@ -34,7 +35,8 @@ export function sweepVoltage(
 	const solutions: DirectorSolution[] = [];
 	voltages_V.forEach((voltage_V, index) => {
 		if (index > 0) {
-			solutions.push(solveAlong({ ws, cell, voltages_V: [voltage_V], newton }));
+			const voltages = ladderBetween(cell, voltages_V[index - 1], voltage_V);
+			solutions.push(solveAlong({ ws, cell, voltages_V: voltages, newton }));
 		} else if (start) {
 			loadStartProfile(ws, cell, start);
 			solutions.push(solveAlong({ ws, cell, voltages_V: [voltage_V], newton }));
