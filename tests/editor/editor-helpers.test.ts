@@ -48,6 +48,37 @@ describe('debounced autosave', () => {
 		vi.useRealTimers();
 	});
 
+	it('with leading saving, a single edit after a quiet spell is saved at once', async () => {
+		vi.useFakeTimers();
+		let now = 1000;
+		const saved: number[] = [];
+		const saver = createDebouncedSaver<number>({
+			save: async (n) => void saved.push(n),
+			delay_ms: 100,
+			maxWait_ms: 250,
+			leading: true,
+			now: () => now
+		});
+		saver.schedule(1);
+		await vi.advanceTimersByTimeAsync(0);
+		expect(saved).toEqual([1]);
+		// Edits right after it wait for the pause, and only the latest is written.
+		saver.schedule(2);
+		now += 30;
+		saver.schedule(3);
+		await vi.advanceTimersByTimeAsync(0);
+		expect(saved).toEqual([1]);
+		now += 100;
+		await vi.advanceTimersByTimeAsync(100);
+		expect(saved).toEqual([1, 3]);
+		// After a quiet spell the next single edit is again written at once.
+		now += 500;
+		saver.schedule(4);
+		await vi.advanceTimersByTimeAsync(0);
+		expect(saved).toEqual([1, 3, 4]);
+		vi.useRealTimers();
+	});
+
 	it('reports a failed save instead of throwing', async () => {
 		const onError = vi.fn();
 		const saver = createDebouncedSaver<number>({

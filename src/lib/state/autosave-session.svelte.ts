@@ -66,6 +66,7 @@ export class AutosaveSession {
 	#saver = createDebouncedSaver<Snapshot>({
 		delay_ms: AUTOSAVE_DELAY_ms,
 		maxWait_ms: AUTOSAVE_MAX_WAIT_ms,
+		leading: true,
 		save: async (s) => {
 			const text = serializeDesign(s.design);
 			if (!s.unsaved && text === this.#demoText) return;
