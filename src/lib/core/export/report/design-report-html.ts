@@ -17,7 +17,7 @@ import { escapeHtml, fixed, htmlTable } from './html-text';
 import { windowPlotSvg } from './window-plot-svg';
 import { REPORT_CSS } from './report-css';
 import { legibilityModelHtml } from './legibility-model-html';
-import { reportFindings } from './report-findings';
+import { reportFindings } from '../../findings/report-findings';
 import { findingsTable } from './findings-table';
 import { rulesSection } from './rules-section';
 import { loadSection } from './load-section';

@@ -4,8 +4,8 @@
  * its findings in a `findings` list) plus those of the caller's extra analyses. A finding seen
  * twice (same code, message and electrodes) is listed once.
  */
-import type { DesignReport } from '../../analyze-design';
-import type { Finding } from '../../findings/finding';
+import type { DesignReport } from '../analyze-design';
+import type { Finding } from './finding';
 
 function isFinding(value: unknown): value is Finding {
 	if (typeof value !== 'object' || value === null) return false;
