@@ -60,7 +60,7 @@ const digit = {
 	height_mm: 12,
 	width_mm: 7,
 	stroke_mm: 1.5,
-	gap_mm: 0.12,
+	gap_mm: 0.35,
 	slant_deg: 6,
 	decimalPoint: true
 };
@@ -116,31 +116,42 @@ groups.push({
 	generator: { kind: moisture.kind, params: moisture.params }
 });
 
-// Battery gauge: a frame with a terminal nub, and three level cells inside.
+// Battery gauge: a frame with a terminal nub, and three level cells inside. The frame is open for
+// 1 mm in the middle of its top side, where the cells' leads leave; the cells sit 0.6 mm below
+// the frame's top so the leads can run above them to that opening.
 const bx = 6;
 const by = 5.5;
+const breakL = bx + 2.7;
+const breakR = bx + 3.7;
 add({
 	id: 'batFrame',
 	name: 'Battery frame',
 	kind: 'icon',
 	outline: [
-		pt(bx, by),
+		pt(breakR, by),
 		pt(bx + 6.4, by),
 		pt(bx + 6.4, by + 1),
 		pt(bx + 7, by + 1),
 		pt(bx + 7, by + 2.6),
 		pt(bx + 6.4, by + 2.6),
 		pt(bx + 6.4, by + 3.6),
-		pt(bx, by + 3.6)
-	],
-	holes: [rect(bx + 0.45, by + 0.45, 5.5, 2.7)]
+		pt(bx, by + 3.6),
+		pt(bx, by),
+		pt(breakL, by),
+		pt(breakL, by + 0.45),
+		pt(bx + 0.45, by + 0.45),
+		pt(bx + 0.45, by + 3.15),
+		pt(bx + 5.95, by + 3.15),
+		pt(bx + 5.95, by + 0.45),
+		pt(breakR, by + 0.45)
+	]
 });
 for (let i = 0; i < 3; i++) {
 	add({
 		id: `bat${i + 1}`,
 		name: `Battery ${i + 1}`,
 		kind: 'icon',
-		outline: rect(bx + 0.7 + i * 1.72, by + 0.7, 1.55, 2.2)
+		outline: rect(bx + 0.7 + i * 1.72, by + 1.05, 1.55, 1.85)
 	});
 }
 
@@ -217,28 +228,49 @@ add({
 	]
 });
 
-// Wiring: digit k uses two lines; a, f, e, d on the first and b, g, c, DP on the second.
+// Wiring in bands, as multiplexed glass is usually laid out so that each common's back plate can
+// run across the glass without crossing another: COM1 along the top (the icon row and each digit's
+// a and b), COM2 and COM3 through the middle of the digits (f, g / e, c), COM4 along the bottom
+// (d, DP, the moisture bar and the unit). Digit k uses two lines, a, f, e, d on the first and
+// b, g, c, DP on the second; every icon, bar step and colon dot has a line of its own, so its
+// lead may cross the other commons' plates where no electrode uses the crossing pair.
+// Pins follow the leads: each line's pin sits where its lead comes down, so leads run to the ledge
+// without crossing. The digits and the bar steps come down through the gaps of the bar in order
+// across the glass (a line's place is the centre of its lowest electrode); the icons' leads run
+// over the top and down the right side, so their pins close the row, the rightmost icon's first.
+// The colon's upper dot sends its lead up between the digits and joins the icons' leads.
 const commons = ['COM1', 'COM2', 'COM3', 'COM4'].map((name, i) => ({ id: `com${i + 1}`, name }));
+const lineWiring: (string | null)[][] = [];
+for (let n = 1; n <= 10; n++) lineWiring.push([null, null, null, `bar${n}`]);
+lineWiring.push([null, null, 'colL', null], [null, null, null, 'unitL']);
+for (let n = 1; n <= 4; n++)
+	lineWiring.push(
+		[`d${n}a`, `d${n}f`, `d${n}e`, `d${n}d`],
+		[`d${n}b`, `d${n}g`, `d${n}c`, `dp${n}`]
+	);
+const lowestCentre = (wiring: readonly (string | null)[]): number => {
+	const outlines = wiring
+		.filter((id): id is string => id !== null)
+		.map((id) => electrodes.find((e) => e.id === id)!.outline);
+	const lowest = outlines.reduce((a, b) =>
+		Math.max(...a.map((p) => p.y)) >= Math.max(...b.map((p) => p.y)) ? a : b
+	);
+	return (Math.min(...lowest.map((p) => p.x)) + Math.max(...lowest.map((p) => p.x))) / 2;
+};
+lineWiring.sort((a, b) => lowestCentre(a) - lowestCentre(b));
+for (const id of ['rain', 'alarm', 'colU', 'clock', 'drop', 'bat3', 'bat2', 'bat1', 'batFrame'])
+	lineWiring.push(id === 'colU' ? [null, id, null, null] : [id, null, null, null]);
 const lines: { id: string; name: string }[] = [];
-const assign = (ids: readonly string[]) => {
-	const line = { id: `seg${lines.length + 1}`, name: `SEG${lines.length + 1}` };
+lineWiring.forEach((wiring, k) => {
+	const line = { id: `seg${k + 1}`, name: `SEG${k + 1}` };
 	lines.push(line);
-	ids.forEach((id, i) => {
+	wiring.forEach((id, i) => {
+		if (id === null) return;
 		const e = electrodes.find((x) => x.id === id)!;
 		e.common = commons[i].id;
 		e.line = line.id;
 	});
-};
-for (let n = 1; n <= 4; n++) {
-	assign([`d${n}a`, `d${n}f`, `d${n}e`, `d${n}d`]);
-	assign([`d${n}b`, `d${n}g`, `d${n}c`, `dp${n}`]);
-}
-assign(['bar1', 'bar2', 'bar3', 'bar4']);
-assign(['bar5', 'bar6', 'bar7', 'bar8']);
-assign(['bar9', 'bar10', 'colU', 'colL']);
-assign(['batFrame', 'bat1', 'bat2', 'bat3']);
-assign(['drop', 'clock', 'alarm', 'unitL']);
-assign(['rain']);
+});
 
 const design: Design = {
 	format: DESIGN_FORMAT,
@@ -272,13 +304,16 @@ const design: Design = {
 	cell: DEFAULT_CELL,
 	lighting: { illuminant: 'D65', observer: 2, illuminance_lx: 500 },
 	rules: DEFAULT_RULES,
-	pinout: DEFAULT_PINOUT,
+	// 29 lines and 4 commons on a 1.5 mm elastomeric pitch: the pads spread under the readout.
+	pinout: { ...DEFAULT_PINOUT, pitch_mm: 1.5 },
 	legibility: {
 		...defaultLegibility({ distance_mm: 600, transflective: false }),
 		reading: { text: '12:34', bars: 6, icons: ['batFrame', 'bat1', 'bat2', 'drop', 'clock'] }
 	},
 	orientation: DEFAULT_ORIENTATION,
-	glassArt: DEFAULT_GLASS_ART
+	// Fine leads (50 µm) and a 50 µm back-plate margin, so leads pass through the 0.35 mm gaps
+	// where the digits' segments meet.
+	glassArt: { ...DEFAULT_GLASS_ART, overlapMargin_mm: 0.05, traceWidth_mm: 0.05 }
 };
 
 // The glass drawing (transfer points and traces) is generated for the drawing above and stored

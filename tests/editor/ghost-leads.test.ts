@@ -2,7 +2,7 @@
  * A lead drawn by hand across another common's back plate is a ghost; clicking its finding picks
  * exactly that lead. Geometry by hand: SEG1's lead runs along y = 11 mm from A (10–12 mm) to
  * x = 30 mm, straight through B (20–22 mm), which sits on COM2's plate — so (COM2, SEG1) lights
- * there, inside the viewing area.
+ * there, inside the viewing area (C gives that pair an electrode, so the crossing is driven).
  */
 import { describe, expect, it } from 'vitest';
 import { checkGlass } from '$lib/core/glass/check-glass';
@@ -37,7 +37,8 @@ function design(): Design {
 		...d,
 		electrodes: [
 			electrode('a', square(10, 10), { common: 'com1', line: 'seg1' }),
-			electrode('b', square(20, 10), { common: 'com2', line: 'seg2' })
+			electrode('b', square(20, 10), { common: 'com2', line: 'seg2' }),
+			electrode('c', square(40, 30), { common: 'com2', line: 'seg1' })
 		],
 		groups: [],
 		glassArt: { ...d.glassArt, traces: [across, aside] }

@@ -22,6 +22,21 @@ const box = (x: number, y: number, w: number, h: number) => [
 ];
 
 /**
+ * The two-electrode glass plus E3 (COM2, SEG1), 3 × 1 mm at (16, 3.4) just above E2: the pair
+ * (COM2, SEG1) now drives an electrode, so a SEG1 lead over COM2's plate lights a ghost.
+ */
+export function crossedPairGlass(): Design {
+	const d = twoElectrodeGlass();
+	return {
+		...d,
+		electrodes: [
+			...d.electrodes,
+			electrode('e3', box(16, 3.4, 3, 1), { common: 'com2', line: 'seg1' })
+		]
+	};
+}
+
+/**
  * Glass 30 × 20 mm, ledge at the bottom; E1 (COM1, SEG1) at (5, 5) and E2 (COM2, SEG2) at (15, 5),
  * both 5 × 3 mm, 5 mm apart: a drawing every part of the glass check can be worked by hand on.
  */

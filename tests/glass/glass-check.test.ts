@@ -16,7 +16,7 @@ import { glassExportFiles } from '../../src/lib/core/export/glass-export';
 import { signedArea } from '../../src/lib/core/geometry/polygon';
 import { expectWithin } from '../helpers/tolerance';
 import { electrode } from '../commands/fixtures';
-import { twoElectrodeGlass } from './fixture';
+import { crossedPairGlass, twoElectrodeGlass } from './fixture';
 
 const rect = (x: number, y: number, w: number, h: number) => [
 	{ x, y },
@@ -89,9 +89,13 @@ describe('generation', () => {
 });
 
 describe('ghosts, shorts and bad geometry', () => {
-	/** The two-electrode glass, generated, plus one hand-drawn SEG1 lead. */
-	function withHandTrace(points: { x: number; y: number }[], width_mm: number): Design {
-		const d = twoElectrodes();
+	/** The two-electrode glass (or another), generated, plus one hand-drawn SEG1 lead. */
+	function withHandTrace(
+		points: { x: number; y: number }[],
+		width_mm: number,
+		base: () => Design = twoElectrodes
+	): Design {
+		const d = base();
 		const routed = applyPatch(d, generateGlass(d));
 		return applyPatch(
 			routed,
@@ -99,18 +103,17 @@ describe('ghosts, shorts and bad geometry', () => {
 		);
 	}
 
+	// The last run lies at y = 8.07 (band 8.05–8.09), inside COM2's plate margin under E2
+	// (plate 14.9–20.1 × 4.9–8.1) and 0.05 mm clear of E2 itself: overlap 5.2 × 0.04 = 0.208 mm².
+	const underE2 = [
+		{ x: 9.9, y: 6.5 },
+		{ x: 12, y: 6.5 },
+		{ x: 12, y: 8.07 },
+		{ x: 22, y: 8.07 }
+	];
+
 	it("reports a hand lead across another common's back plate with its pair and area", () => {
-		// The last run lies at y = 8.07 (band 8.05–8.09), inside COM2's plate margin under E2
-		// (plate 14.9–20.1 × 4.9–8.1) and 0.05 mm clear of E2 itself: overlap 5.2 × 0.04 = 0.208 mm².
-		const d = withHandTrace(
-			[
-				{ x: 9.9, y: 6.5 },
-				{ x: 12, y: 6.5 },
-				{ x: 12, y: 8.07 },
-				{ x: 22, y: 8.07 }
-			],
-			0.04
-		);
+		const d = withHandTrace(underE2, 0.04, crossedPairGlass);
 		const report = checkGlass(d);
 		const ghosts = report.ghosts.filter((g) => g.conductor === 'hand');
 		expect(ghosts.map((g) => [g.commonName, g.lineName, g.where])).toEqual([
@@ -128,6 +131,28 @@ describe('ghosts, shorts and bad geometry', () => {
 		expect(composite.content).toMatch(
 			/<path id="ghost-\d+" data-pair="COM2\/SEG1" data-where="visible"/
 		);
+	});
+
+	it('calls the same crossing idle when no electrode uses its pair, and draws no ghost for it', () => {
+		// Without E3, (COM2, SEG1) drives nothing: the multiplexed drive never selects that pair, so
+		// the overlap only sees the unselected voltage (common practice: leads cross such commons).
+		const d = withHandTrace(underE2, 0.04);
+		const report = checkGlass(d);
+		const ghosts = report.ghosts.filter((g) => g.conductor === 'hand');
+		expect(ghosts.map((g) => [g.commonName, g.lineName, g.where])).toEqual([
+			['COM2', 'SEG1', 'idle']
+		]);
+		expectWithin([{ label: 'idle overlap area', expected: 0.208, actual: ghosts[0].area_mm2 }], {
+			tolerance: 1e-9,
+			unit: 'mm²',
+			source: 'hand calculation: 5.2 mm × 0.04 mm strip'
+		});
+		const idle = report.findings.find((x) => x.code === 'glass.ghost-idle');
+		expect(idle?.severity).toBe('pass');
+		expect(idle?.message).toContain('(COM2, SEG1)');
+		expect(report.findings.some((x) => x.code === 'glass.ghost-visible')).toBe(false);
+		const composite = glassExportFiles(d, ['svg']).find((x) => x.name.endsWith('-composite.svg'))!;
+		expect(composite.content).not.toContain('data-pair="COM2/SEG1"');
 	});
 
 	it('reports a lead that runs into another line as a short', () => {

@@ -12,14 +12,17 @@ import { serializeDesign } from '../../src/lib/core/design/parse-design';
 import type { Design } from '../../src/lib/core/design/schema';
 import { checkGlass } from '../../src/lib/core/glass/check-glass';
 import { runCli } from '../cli/run-cli';
-import { twoElectrodeGlass } from './fixture';
+import { crossedPairGlass, twoElectrodeGlass } from './fixture';
 
 const glassCodes = (d: Design) =>
 	(analyzeDesign(d).glass?.findings ?? []).filter((f) => f.severity !== 'pass').map((f) => f.code);
 
-/** The generated two-electrode glass plus a hand-drawn SEG1 lead whose last run crosses COM2's plate. */
+/**
+ * The generated two-electrode glass (with E3 on the crossing pair) plus a hand-drawn SEG1 lead whose
+ * last run crosses COM2's plate.
+ */
 function withGhostLead(): Design {
-	const d = twoElectrodeGlass();
+	const d = crossedPairGlass();
 	const routed = applyPatch(d, generateGlass(d));
 	// Last run at y = 8.07, 0.04 mm wide (band 8.05–8.09), under COM2's plate margin below E2
 	// (plate 14.9–20.1 × 4.9–8.1): overlap 5.2 mm × 0.04 mm = 0.208 mm² (hand calculation).

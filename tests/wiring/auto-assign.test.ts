@@ -18,9 +18,18 @@ import { analyzeWiring } from '../../src/lib/core/drive/analyze-drive';
 import { analyzeDesign, analyzeDesignWithCell } from '../../src/lib/core/analyze-design';
 import { electrode, emptyDesign, square } from '../commands/fixtures';
 
+/**
+ * The demo with its wiring cleared. Its glass drawing belongs to the old wiring, so it goes too,
+ * and the pins sit at 1 mm: static drive needs 54 of them on the 66 mm edge.
+ */
 const cleared = (): Design => {
 	const demo = demoDesign();
-	return applyPatch(demo, clearWiring(demo));
+	const bare: Design = {
+		...demo,
+		pinout: { ...demo.pinout, pitch_mm: 1 },
+		glassArt: { ...demo.glassArt, traces: [], transfers: [] }
+	};
+	return applyPatch(bare, clearWiring(bare));
 };
 const assigned = (design: Design, commons: number) =>
 	applyPatch(design, autoAssign(design, { commons }));

@@ -69,15 +69,15 @@ describe('sunglyph pins', () => {
 		const csv = await runCli(['pins', 'd.json', '--csv'], files);
 		expect(csv.code).toBe(0);
 		const rows = parseCsv(csv.stdout);
-		// 4 commons + 14 lines, commons first.
-		expect(rows).toHaveLength(1 + 18);
+		// 4 commons + 29 lines (8 for the digits, one each for 21 icons, bar steps and dots), commons first.
+		expect(rows).toHaveLength(1 + 33);
 		expect(rows[1].slice(0, 2)).toEqual(['1', 'COM1']);
 		expect(rows[5].slice(0, 2)).toEqual(['5', 'SEG1']);
 		const header = await runCli(['pins', 'd.json', '--header'], files);
 		expect(header.stdout).toContain('#define LCD_COMMONS 4');
-		expect(header.stdout).toContain('#define LCD_LINES 14');
+		expect(header.stdout).toContain('#define LCD_LINES 29');
 		const table = await runCli(['pins', 'd.json'], files);
-		expect(table.stdout).toContain('18 pins on the bottom edge');
+		expect(table.stdout).toContain('33 pins on the bottom edge');
 		const segments = await runCli(['pins', 'd.json', '--segments'], files);
 		expect(parseCsv(segments.stdout)).toHaveLength(1 + 53);
 	});

@@ -12,7 +12,8 @@ import { ringBounds } from '$lib/core/glass/rings';
 const PLACE_OF_CODE: Record<string, GhostPlace> = {
 	'glass.ghost-visible': 'visible',
 	'glass.ghost-hidden': 'bezel',
-	'glass.ghost-under-seal': 'seal'
+	'glass.ghost-under-seal': 'seal',
+	'glass.ghost-idle': 'idle'
 };
 
 /** Tolerance for comparing bounds, in millimetres. */

@@ -101,10 +101,12 @@ export function compositeSvg(options: {
 	const { art } = options;
 	const ghosts = [
 		'<g id="ghosts" fill="#ff0000" stroke="#ff0000" stroke-width="0.03">',
-		...options.ghosts.map(
-			(g, i) =>
-				`<path id="ghost-${i + 1}" data-pair="${escapeXml(`${g.commonName}/${g.lineName}`)}" data-where="${g.where}" d="${ringsToPathData([g.ring])}"/>`
-		),
+		...options.ghosts
+			.filter((g) => g.where !== 'idle')
+			.map(
+				(g, i) =>
+					`<path id="ghost-${i + 1}" data-pair="${escapeXml(`${g.commonName}/${g.lineName}`)}" data-where="${g.where}" d="${ringsToPathData([g.ring])}"/>`
+			),
 		'</g>'
 	];
 	return svgDocument({

@@ -27,6 +27,10 @@ export const GLASS_CODES: readonly FindingCode[] = [
 		meaning: 'a lead over a foreign plate switches outside the viewing area, behind the bezel'
 	},
 	{ code: 'glass.ghost-under-seal', meaning: 'a plate overlap lies under the seal, with no fluid' },
+	{
+		code: 'glass.ghost-idle',
+		meaning: 'a plate overlap crosses a (common, line) pair no electrode uses, so it stays dark'
+	},
 	{ code: 'glass.bad-outline', meaning: 'an electrode outline crosses itself or has no area' },
 	{ code: 'glass.off-glass', meaning: "an electrode lies outside the seal's inner edge" },
 	{ code: 'glass.ledge-short', meaning: 'the contact ledge is shallower than the connector needs' },

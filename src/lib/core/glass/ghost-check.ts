@@ -9,7 +9,10 @@
  * transfer points. A lead's overlap with the plate of its own electrode's crossing, within reach of
  * that electrode, only extends the electrode and is not reported. Where a ghost lies decides its
  * weight: in the viewing area it is visible; inside the seal but outside the viewing area it
- * switches behind the bezel; under the seal or beyond it there is no liquid crystal.
+ * switches behind the bezel; under the seal or beyond it there is no liquid crystal. An overlap
+ * whose (common, line) pair drives no electrode is idle: in a multiplexed drive that pair's data is
+ * never on, so it sees only the unselected RMS voltage, like any dark segment (common practice:
+ * leads are run across commons they share no electrode with).
  */
 import type { Design, Rect } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
@@ -19,7 +22,11 @@ import type { GlassArtwork } from './artwork';
 import { nearPairs } from './near-pairs';
 import { clipToConvex, polygonArea, polygonCentroid, ringBounds } from './rings';
 
-export type GhostPlace = 'visible' | 'bezel' | 'seal';
+/**
+ * Where a ghost lies, or `idle` when no electrode uses its (common, line) pair: the driver never
+ * selects that pair, so the overlap only ever sees the unselected voltage and stays dark.
+ */
+export type GhostPlace = 'visible' | 'bezel' | 'seal' | 'idle';
 
 export interface Ghost {
 	common: string;
@@ -116,8 +123,9 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 			const probe = Float64Array.from(poly.flatMap((p) => [p.x, p.y]));
 			if (minimumGapBetweenRings([probe], [ownRing]) <= reach) return;
 		}
-		const where = place(art, design.glass.viewingArea, centre);
-		if (!where) return;
+		const placed = place(art, design.glass.viewingArea, centre);
+		if (!placed) return;
+		const where: GhostPlace = own ? placed : 'idle';
 		ghosts.push({
 			common: b.net,
 			commonName: b.netName,

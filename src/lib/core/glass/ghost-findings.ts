@@ -2,7 +2,7 @@
  * Ghosts as findings: one per (common, line, place), with the summed overlap area and the
  * electrodes whose plates or leads are involved. Visible ghosts fail; ghosts behind the bezel warn
  * (they switch, and show through any gap in the bezel or at an angle); under the seal there is no
- * fluid, so they pass with a note.
+ * fluid, so they pass with a note; so do idle overlaps, whose pair no electrode uses.
  */
 import { finding, type Finding } from '../findings/finding';
 import type { Ghost } from './ghost-check';
@@ -51,6 +51,17 @@ export function ghostFindings(ghosts: readonly Ghost[]): Finding[] {
 					severity: 'warn',
 					message: `Ghost behind the bezel: ${what} switch whenever ${pair} is driven.`,
 					fix: `Keep the bezel over it, or reroute the ${g.lineName} lead away from ${g.commonName}'s plate.`,
+					electrodes,
+					location
+				})
+			);
+		else if (g.where === 'idle')
+			out.push(
+				finding({
+					code: 'glass.ghost-idle',
+					severity: 'pass',
+					message: `${what} cross ${pair}, a pair no electrode uses: it is never selected, so they stay dark.`,
+					fix: `Keep ${pair} unassigned, or reroute the ${g.lineName} lead before giving that pair an electrode.`,
 					electrodes,
 					location
 				})

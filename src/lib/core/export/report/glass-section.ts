@@ -7,7 +7,12 @@ import type { Design } from '../../design/schema';
 import type { GlassReport } from '../../glass/check-glass';
 import { fixed, htmlTable } from './html-text';
 
-const PLACE = { visible: 'in the viewing area', bezel: 'behind the bezel', seal: 'under the seal' };
+const PLACE = {
+	visible: 'in the viewing area',
+	bezel: 'behind the bezel',
+	seal: 'under the seal',
+	idle: 'over an unused pair (stays dark)'
+};
 
 export function glassSection(options: { design: Design; glass: GlassReport }): string {
 	const { design, glass } = options;
@@ -33,7 +38,12 @@ export function glassSection(options: { design: Design; glass: GlassReport }): s
 			['Pads', `${layout.pads.length} at ${fixed(design.pinout.pitch_mm, 2)} mm pitch`],
 			['Back plates', `${plates} on ${glass.artwork.common.length} commons`],
 			['Leads', String(design.glassArt.traces.length)],
-			['Ghosts', hasGlassDrawing(design) ? String(glass.ghosts.length) : '—']
+			[
+				'Ghosts',
+				hasGlassDrawing(design)
+					? String(glass.ghosts.filter((g) => g.where !== 'idle').length)
+					: '—'
+			]
 		]
 	});
 	if (!hasGlassDrawing(design))
@@ -57,7 +67,7 @@ export function glassSection(options: { design: Design; glass: GlassReport }): s
 
 /** Ghosts summed by where they lie (visible first), with the crossings that cause them. */
 function ghostRows(glass: GlassReport) {
-	const rows = (['visible', 'bezel', 'seal'] as const).map((where) => {
+	const rows = (['visible', 'bezel', 'seal', 'idle'] as const).map((where) => {
 		const ghosts = glass.ghosts.filter((g) => g.where === where);
 		return {
 			where,
