@@ -66,5 +66,6 @@ export function drawGlassArt(
 			else if (c.kind === 'pad') path(c.rings, { fill: '#b08a1a', alpha: 0.85 });
 			else if (c.kind === 'transfer') path(c.rings, { fill: '#5a5f66', alpha: 0.6 });
 	for (const g of options.ghosts)
-		if (g.where === 'visible' || g.where === 'bezel') path([g.ring], { fill: '#ff1a1a', alpha: 0.95, stroke: '#ff1a1a' });
+		if (g.where === 'visible' || g.where === 'bezel')
+			path([g.ring], { fill: '#ff1a1a', alpha: 0.95, stroke: '#ff1a1a' });
 }
