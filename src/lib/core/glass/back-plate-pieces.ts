@@ -6,13 +6,17 @@
  * even that leaves nothing (distance below the gap), the two commons' plates would touch.
  *
  * An electrode's holes stay holes in its piece, shrunk by the margin (another common's electrode may
- * sit inside one). Curves are flattened to 5 µm.
+ * sit inside one). Curves are flattened to 5 µm; the growth is the polygon engine's offset
+ * (`geometry/polygon-clipper.ts`) with mitred corners, squared off where a mitre would reach
+ * beyond twice the margin, so sharp corners do not spike.
  */
 import type { Design, Electrode } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
 import { flattenContour } from '../geometry/flatten';
 import { minimumGapBetweenRings } from '../geometry/minimum-gap';
-import { boundsOverlap, offsetRing, ringBounds } from './rings';
+import { offsetRegion } from '../geometry/polygon-clipper';
+import { signedArea } from '../geometry/polygon';
+import { boundsOverlap, ringBounds } from './rings';
 
 export const PLATE_FLATTEN_um = 5;
 
@@ -21,7 +25,7 @@ export interface PlatePiece {
 	common: string;
 	/** The electrode's flattened outline and holes. */
 	rings: Float64Array[];
-	/** The grown outline, then the shrunk holes (even-odd). */
+	/** The grown outline (the largest outer ring), then the shrunk holes and any other ring (even-odd). */
 	grown: Float64Array[];
 	margin_mm: number;
 }
@@ -31,6 +35,20 @@ export interface MarginConflict {
 	distance_mm: number;
 	/** True when the two plates cannot be kept apart by the minimum gap at all. */
 	touching: boolean;
+}
+
+/**
+ * The electrode's rings grown by `margin_mm`: outline out, holes in, largest outer ring first. An
+ * outline with no area grows into nothing; its flattened outline stands in, so every piece has a
+ * first ring (the glass check names the outline).
+ */
+function grownPiece(rings: Float64Array[], margin_mm: number): Float64Array[] {
+	const grown = offsetRegion(rings, { delta_mm: margin_mm, join: 'miter', miterLimit: 2 });
+	const first = grown.reduce(
+		(best, r, k) => (signedArea(r) > signedArea(grown[best]) ? k : best),
+		0
+	);
+	return grown.length === 0 ? [rings[0]] : [grown[first], ...grown.filter((_, k) => k !== first)];
 }
 
 export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: MarginConflict[] } {
@@ -69,7 +87,7 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 		electrode,
 		common: electrode.common as string,
 		rings: outlines[i],
-		grown: outlines[i].map((r, k) => offsetRing(r, k === 0 ? allowed[i] : -allowed[i])),
+		grown: grownPiece(outlines[i], allowed[i]),
 		margin_mm: allowed[i]
 	}));
 	return { pieces, conflicts };

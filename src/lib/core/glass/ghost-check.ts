@@ -4,9 +4,9 @@
  * (common, segment line) voltage and switches whenever that crossing is driven — a ghost
  * (standard practice in segment-glass artwork: every front/back ITO overlap is active).
  *
- * Overlap areas are exact polygon clips of each lead rectangle (convex) against the other plate's
- * rings (Sutherland–Hodgman), and of each electrode against the other plate's convex leads and
- * transfer points. A lead's overlap with the plate of its own electrode's crossing, within reach of
+ * Overlaps are intersections by the one polygon engine (`geometry/polygon-clipper.ts`, even-odd,
+ * holes counted) of each lead run against the other plate's conductors, and of each electrode
+ * against the other plate's leads and transfer points; one ghost per island of overlap. A lead's overlap with the plate of its own electrode's crossing, within reach of
  * that electrode, only extends the electrode and is not reported. Where a ghost lies decides its
  * weight: in the viewing area it is visible; inside the seal but outside the viewing area it
  * switches behind the bezel; under the seal or beyond it there is no liquid crystal.
@@ -14,10 +14,12 @@
 import type { Design, Rect } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
 import { minimumGapBetweenRings } from '../geometry/minimum-gap';
+import { ringCentroid, signedArea } from '../geometry/polygon';
+import { intersectRegions, regionToPolygons } from '../geometry/polygon-clipper';
 import type { XY } from '../geometry/vec';
 import type { GlassArtwork } from './artwork';
 import { nearPairs } from './near-pairs';
-import { clipToConvex, polygonArea, polygonCentroid, ringBounds } from './rings';
+import { ringBounds } from './rings';
 
 export type GhostPlace = 'visible' | 'bezel' | 'seal';
 
@@ -28,7 +30,7 @@ export interface Ghost {
 	lineName: string;
 	area_mm2: number;
 	where: GhostPlace;
-	/** The overlap polygon. */
+	/** The overlap's outer ring (its holes, if any, are taken off `area_mm2`). */
 	ring: Float64Array;
 	/** Electrodes involved: the electrode over the wrong plate, or the electrodes whose plate is crossed. */
 	electrodes: string[];
@@ -38,12 +40,13 @@ export interface Ghost {
 
 interface Item {
 	bounds: Bounds;
-	ring: Float64Array;
+	/** Outline first, then holes (even-odd). */
+	rings: Float64Array[];
 	net: string;
 	netName: string;
 	conductor: string;
-	convex: boolean;
-	holes: Float64Array[];
+	/** A lead run or a transfer point, as against an electrode or a back-plate piece. */
+	lead: boolean;
 	electrodes: string[];
 }
 
@@ -71,28 +74,26 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 			n.conductors
 				.filter((c) => c.kind === 'trace' || c.kind === 'electrode')
 				.flatMap((c) =>
-					(c.kind === 'electrode' ? [c.rings[0]] : c.rings).map((ring) => ({
-						bounds: ringBounds(ring),
-						ring,
+					(c.kind === 'electrode' ? [c.rings] : c.rings.map((r) => [r])).map((rings) => ({
+						bounds: ringBounds(rings[0]),
+						rings,
 						net: n.id,
 						netName: n.name,
 						conductor: c.id,
-						convex: c.kind === 'trace',
-						holes: c.kind === 'electrode' ? c.rings.slice(1) : [],
+						lead: c.kind === 'trace',
 						electrodes: c.electrodes
 					}))
 				)
 		);
 	const back: Item[] = art.common.flatMap((n) =>
 		n.conductors.flatMap((c) =>
-			(c.evenOdd ? [c.rings[0]] : c.rings).map((ring) => ({
-				bounds: ringBounds(ring),
-				ring,
+			(c.evenOdd ? [c.rings] : c.rings.map((r) => [r])).map((rings) => ({
+				bounds: ringBounds(rings[0]),
+				rings,
 				net: n.id,
 				netName: n.name,
 				conductor: c.id,
-				convex: c.kind !== 'plate',
-				holes: c.evenOdd ? c.rings.slice(1) : [],
+				lead: c.kind !== 'plate',
 				electrodes: c.electrodes
 			}))
 		)
@@ -102,33 +103,32 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 	nearPairs(front, back, 0, (i, j) => {
 		const f = front[i],
 			b = back[j];
-		if (!f.convex && !b.convex) return; // electrode over a back-plate piece: kept apart by construction
+		if (!f.lead && !b.lead) return; // electrode over a back-plate piece: kept apart by construction
 		if (f.electrodes.length > 0 && commonOf.get(f.electrodes[0]) === b.net) return; // meant to face it
-		const poly = f.convex ? clipToConvex(b.ring, f.ring) : clipToConvex(f.ring, b.ring);
-		let area = polygonArea(poly);
-		for (const hole of f.holes) area -= polygonArea(clipToConvex(hole, b.ring));
-		for (const hole of b.holes) area -= polygonArea(clipToConvex(hole, f.ring));
-		if (area < 1e-6) return;
-		const centre = polygonCentroid(poly);
+		const overlap = intersectRegions(f.rings, b.rings);
+		if (overlap.length === 0) return;
 		const own = crossing.get(`${b.net}\u0000${f.net}`);
 		const ownRing = own ? outlineOf.get(own.id) : undefined;
-		if (ownRing && f.convex) {
-			const probe = Float64Array.from(poly.flatMap((p) => [p.x, p.y]));
-			if (minimumGapBetweenRings([probe], [ownRing]) <= reach) return;
+		for (const island of regionToPolygons(overlap)) {
+			const area =
+				Math.abs(signedArea(island.outer)) -
+				island.holes.reduce((s, h) => s + Math.abs(signedArea(h)), 0);
+			if (area < 1e-6) continue;
+			if (ownRing && f.lead && minimumGapBetweenRings([island.outer], [ownRing]) <= reach) continue;
+			const where = place(art, design.glass.viewingArea, ringCentroid(island.outer));
+			if (!where) continue;
+			ghosts.push({
+				common: b.net,
+				commonName: b.netName,
+				line: f.net,
+				lineName: f.netName,
+				area_mm2: area,
+				where,
+				ring: island.outer,
+				electrodes: [...new Set([...f.electrodes, ...b.electrodes])],
+				conductor: f.conductor
+			});
 		}
-		const where = place(art, design.glass.viewingArea, centre);
-		if (!where) return;
-		ghosts.push({
-			common: b.net,
-			commonName: b.netName,
-			line: f.net,
-			lineName: f.netName,
-			area_mm2: area,
-			where,
-			ring: Float64Array.from(poly.flatMap((p) => [p.x, p.y])),
-			electrodes: [...new Set([...f.electrodes, ...b.electrodes])],
-			conductor: f.conductor
-		});
 	});
 	return ghosts;
 }
