@@ -11,13 +11,14 @@
  * weight: in the viewing area it is visible; inside the seal but outside the viewing area it
  * switches behind the bezel; under the seal or beyond it there is no liquid crystal.
  */
-import type { Design, Rect } from '../design/schema';
+import type { Design, Electrode, Rect } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
 import { minimumGapBetweenRings } from '../geometry/minimum-gap';
 import { ringCentroid, signedArea } from '../geometry/polygon';
 import { intersectRegions, regionToPolygons } from '../geometry/polygon-clipper';
 import type { XY } from '../geometry/vec';
 import type { GlassArtwork } from './artwork';
+import { leadElectrodes } from './lead-reach';
 import { nearPairs } from './near-pairs';
 import { ringBounds } from './rings';
 
@@ -32,7 +33,12 @@ export interface Ghost {
 	where: GhostPlace;
 	/** The overlap's outer ring (its holes, if any, are taken off `area_mm2`). */
 	ring: Float64Array;
-	/** Electrodes involved: the electrode over the wrong plate, or the electrodes whose plate is crossed. */
+	/**
+	 * Electrodes concerned: on the segment side the electrode over the wrong plate, or the
+	 * electrodes a lead serves and the electrode of the (common, line) pair the ghost lights with,
+	 * if the design has one; on the common side the electrodes whose back plate (piece, or the
+	 * pieces a common-plate lead joins) is crossed.
+	 */
 	electrodes: string[];
 	/** Id of the segment-plate conductor (lead or electrode). */
 	conductor: string;
@@ -47,7 +53,10 @@ interface Item {
 	conductor: string;
 	/** A lead run or a transfer point, as against an electrode or a back-plate piece. */
 	lead: boolean;
+	/** The electrode or back-plate piece's own electrode (none for a lead or transfer point). */
 	electrodes: string[];
+	/** The electrodes a ghost of this conductor is named by. */
+	concerns: string[];
 }
 
 const inside = (r: Rect, p: XY) =>
@@ -61,13 +70,18 @@ function place(art: GlassArtwork, viewing: Rect, p: XY): GhostPlace | null {
 }
 
 export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
-	const reach = design.glassArt.overlapMargin_mm + design.glassArt.traceWidth_mm;
-	const crossing = new Map(design.electrodes.map((e) => [`${e.common}\u0000${e.line}`, e]));
+	const near = design.glassArt.overlapMargin_mm + design.glassArt.traceWidth_mm;
+	const crossing = new Map<string, Electrode[]>();
+	for (const e of design.electrodes) {
+		const key = `${e.common}\u0000${e.line}`;
+		crossing.set(key, [...(crossing.get(key) ?? []), e]);
+	}
 	const outlineOf = new Map(
 		art.segment.flatMap((n) =>
 			n.conductors.filter((c) => c.kind === 'electrode').map((c) => [c.id, c.rings[0]] as const)
 		)
 	);
+	const reach = leadElectrodes([...art.segment, ...art.common]);
 	const front: Item[] = art.segment
 		.filter((n) => n.kind === 'segment')
 		.flatMap((n) =>
@@ -81,7 +95,8 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 						netName: n.name,
 						conductor: c.id,
 						lead: c.kind === 'trace',
-						electrodes: c.electrodes
+						electrodes: c.electrodes,
+						concerns: reach.get(c) ?? c.electrodes
 					}))
 				)
 		);
@@ -94,7 +109,8 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 				netName: n.name,
 				conductor: c.id,
 				lead: c.kind !== 'plate',
-				electrodes: c.electrodes
+				electrodes: c.electrodes,
+				concerns: reach.get(c) ?? c.electrodes
 			}))
 		)
 	);
@@ -107,14 +123,16 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 		if (f.electrodes.length > 0 && commonOf.get(f.electrodes[0]) === b.net) return; // meant to face it
 		const overlap = intersectRegions(f.rings, b.rings);
 		if (overlap.length === 0) return;
-		const own = crossing.get(`${b.net}\u0000${f.net}`);
-		const ownRing = own ? outlineOf.get(own.id) : undefined;
+		const pair = crossing.get(`${b.net}\u0000${f.net}`) ?? [];
+		const ownRings = pair.flatMap((e) => outlineOf.get(e.id) ?? []);
+		const electrodes = [...new Set([...f.concerns, ...pair.map((e) => e.id), ...b.concerns])];
 		for (const island of regionToPolygons(overlap)) {
 			const area =
 				Math.abs(signedArea(island.outer)) -
 				island.holes.reduce((s, h) => s + Math.abs(signedArea(h)), 0);
 			if (area < 1e-6) continue;
-			if (ownRing && f.lead && minimumGapBetweenRings([island.outer], [ownRing]) <= reach) continue;
+			if (f.lead && ownRings.length > 0 && minimumGapBetweenRings([island.outer], ownRings) <= near)
+				continue;
 			const where = place(art, design.glass.viewingArea, ringCentroid(island.outer));
 			if (!where) continue;
 			ghosts.push({
@@ -125,7 +143,7 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 				area_mm2: area,
 				where,
 				ring: island.outer,
-				electrodes: [...new Set([...f.electrodes, ...b.electrodes])],
+				electrodes,
 				conductor: f.conductor
 			});
 		}
