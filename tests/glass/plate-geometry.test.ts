@@ -10,6 +10,7 @@ import { buildArtwork } from '../../src/lib/core/glass/artwork';
 import { platePieces } from '../../src/lib/core/glass/back-plate-pieces';
 import { ghostCheck } from '../../src/lib/core/glass/ghost-check';
 import { netArea_mm2 } from '../../src/lib/core/glass/plate-area';
+import { minimumGapBetweenRings } from '../../src/lib/core/geometry/minimum-gap';
 import { expectWithin } from '../helpers/tolerance';
 import { electrode } from '../commands/fixtures';
 import { twoElectrodeGlass } from './fixture';
@@ -128,5 +129,33 @@ describe('centre of area', () => {
 			],
 			{ tolerance: 1e-12, unit: 'mm', source: 'composite-area centroid, worked by hand' }
 		);
+	});
+});
+
+describe('back plates cut back next to another common', () => {
+	it('keep at least the minimum gap along slanted edges', () => {
+		const d = twoElectrodeGlass();
+		// Two parallelograms whose facing edges run along (1, 3)/√10, 0.2 mm apart: a shift of
+		// 0.2·√10/3 mm in x. Margin 0.1 mm each plus the 0.05 mm gap would need 0.25 mm, so each margin
+		// is cut to about (0.2 − 0.05)/2 and the plates must still be 0.05 mm apart.
+		const dx = (0.2 * Math.sqrt(10)) / 3;
+		const slanted = (x: number) => [
+			{ x, y: 5 },
+			{ x: x + 5, y: 5 },
+			{ x: x + 6, y: 8 },
+			{ x: x + 1, y: 8 }
+		];
+		const pair = {
+			...d,
+			electrodes: [
+				{ ...d.electrodes[0], outline: slanted(5) },
+				{ ...d.electrodes[1], outline: slanted(10 + dx) }
+			]
+		};
+		const { pieces, conflicts } = platePieces(pair);
+		expect(conflicts.map((c) => c.touching)).toEqual([false]);
+		const gap = minimumGapBetweenRings([pieces[0].grown[0]], [pieces[1].grown[0]]);
+		expect(gap).toBeGreaterThanOrEqual(pair.rules.minGap_mm);
+		expect(gap).toBeLessThan(pair.rules.minGap_mm + 1e-4);
 	});
 });

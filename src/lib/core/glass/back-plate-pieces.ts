@@ -2,7 +2,8 @@
  * The common plate's pieces: each electrode's outline grown by the overlap margin, so the back
  * plate covers its segment despite front-to-back registration error (common practice: 0.05–0.15 mm
  * per side). Where an electrode of another common is too close for two full margins plus the
- * minimum gap, the margin of both is cut to (distance − gap) / 2 and the pair is reported; where
+ * minimum gap, the margin of both is cut to (distance − gap) / 2, less two steps of the polygon
+ * engine's 10 nm grid so rounding never takes the gap below the minimum, and the pair is reported; where
  * even that leaves nothing (distance below the gap), the two commons' plates would touch.
  *
  * An electrode's holes stay holes in its piece, shrunk by the margin (another common's electrode may
@@ -14,11 +15,13 @@ import type { Design, Electrode } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
 import { flattenContour } from '../geometry/flatten';
 import { minimumGapBetweenRings } from '../geometry/minimum-gap';
-import { offsetRegion } from '../geometry/polygon-clipper';
+import { CLIP_UNITS_PER_mm, offsetRegion } from '../geometry/polygon-clipper';
 import { signedArea } from '../geometry/polygon';
 import { boundsOverlap, ringBounds } from './rings';
 
 export const PLATE_FLATTEN_um = 5;
+/** Two grid steps of the polygon engine: the most its rounding can take off a gap between pieces. */
+const GRID_SLACK_mm = 2 / CLIP_UNITS_PER_mm;
 
 export interface PlatePiece {
 	electrode: Electrode;
@@ -73,7 +76,7 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 			if (!boundsOverlap(bounds[i], bounds[j], reach)) continue;
 			const d = minimumGapBetweenRings(outlines[i], outlines[j]);
 			if (d >= reach) continue;
-			const cut = Math.max(0, (d - gap) / 2);
+			const cut = Math.max(0, (d - gap) / 2 - GRID_SLACK_mm);
 			allowed[i] = Math.min(allowed[i], cut);
 			allowed[j] = Math.min(allowed[j], cut);
 			conflicts.push({
