@@ -34,7 +34,14 @@ function withTrace(points: { x: number; y: number }[], extra: Partial<Trace> = {
 	return { ...d, glassArt: { ...d.glassArt, traces: [...d.glassArt.traces, x] } };
 }
 
+/** A straight two-point lead from (x0, y0) to (x1, y1). */
+const run = (x0: number, y0: number, x1: number, y1: number) => [
+	{ x: x0, y: y0 },
+	{ x: x1, y: y1 }
+];
+
 const glassFindings = (d: Design) => analyzeDesign(d).glass?.findings ?? [];
+const findingOf = (d: Design, code: string) => glassFindings(d).find((f) => f.code === code);
 
 async function checkJson(d: Design) {
 	const run = await runCli(['check', 'd.json', '--json'], { 'd.json': serializeDesign(d) });
@@ -42,20 +49,8 @@ async function checkJson(d: Design) {
 }
 
 const far: [string, { x: number; y: number }[]][] = [
-	[
-		'one point at +1e300 mm',
-		[
-			{ x: 7, y: 7 },
-			{ x: 1e300, y: 7 }
-		]
-	],
-	[
-		'both ends at ∓1e300 mm, across the glass',
-		[
-			{ x: -1e300, y: -1e300 },
-			{ x: 1e300, y: 1e300 }
-		]
-	]
+	['one point at +1e300 mm', run(7, 7, 1e300, 7)],
+	['both ends at ∓1e300 mm, across the glass', run(-1e300, -1e300, 1e300, 1e300)]
 ];
 
 describe('a trace far off the glass', () => {
@@ -80,11 +75,8 @@ describe('a trace far off the glass', () => {
 
 describe('a trace beside the glass', () => {
 	it('that runs past the bottom edge (y = 20 mm) is named, with where it is', async () => {
-		const d = withTrace([
-			{ x: 7, y: 7 },
-			{ x: 7, y: 25 }
-		]);
-		const f = glassFindings(d).find((x) => x.code === 'glass.trace-off-glass');
+		const d = withTrace(run(7, 7, 7, 25));
+		const f = findingOf(d, 'glass.trace-off-glass');
 		expect(f?.message).toMatch(/runs past the edge of the glass/);
 		// The lead's box: x 6.95–7.05, y 6.95–25.05 (square ends, 0.1 mm wide).
 		expect(f?.location?.y_mm).toBeCloseTo(6.95, 9);
@@ -93,22 +85,16 @@ describe('a trace beside the glass', () => {
 	});
 
 	it('that lies entirely off the glass says nothing is under it', async () => {
-		const d = withTrace([
-			{ x: 40, y: 40 },
-			{ x: 45, y: 45 }
-		]);
-		const f = glassFindings(d).find((x) => x.code === 'glass.trace-off-glass');
+		const d = withTrace(run(40, 40, 45, 45));
+		const f = findingOf(d, 'glass.trace-off-glass');
 		expect(f?.message).toMatch(/entirely off the glass: nothing is under it/);
 		expect((await checkJson(d)).code).toBe(1);
 	});
 
 	it('on the common plate over the ledge (y 17–20 mm) has no back glass under it', async () => {
-		const ledge = [
-			{ x: 5, y: 18.5 },
-			{ x: 10, y: 18.5 }
-		];
+		const ledge = run(5, 18.5, 10, 18.5);
 		const common = withTrace(ledge, { plate: 'common', net: 'com1' });
-		const f = glassFindings(common).find((x) => x.code === 'glass.trace-off-glass');
+		const f = findingOf(common, 'glass.trace-off-glass');
 		expect(f?.message).toMatch(/entirely off the back glass/);
 		expect(f?.electrodes).toEqual(['e1']);
 		expect((await checkJson(common)).code).toBe(1);
@@ -120,11 +106,8 @@ describe('a trace beside the glass', () => {
 
 describe('a degenerate trace', () => {
 	it('of no length is named and fails the check', async () => {
-		const d = withTrace([
-			{ x: 7, y: 7 },
-			{ x: 7, y: 7 }
-		]);
-		const f = glassFindings(d).find((x) => x.code === 'glass.trace-degenerate');
+		const d = withTrace(run(7, 7, 7, 7));
+		const f = findingOf(d, 'glass.trace-degenerate');
 		expect(f?.message).toMatch(/has no length/);
 		const { code, json } = await checkJson(d);
 		expect(code).toBe(1);
@@ -133,7 +116,7 @@ describe('a degenerate trace', () => {
 
 	it('of one point is named by the check; the file reader refuses it with its path', async () => {
 		const d = withTrace([{ x: 7, y: 7 }]);
-		const f = glassFindings(d).find((x) => x.code === 'glass.trace-degenerate');
+		const f = findingOf(d, 'glass.trace-degenerate');
 		expect(f?.message).toMatch(/has 1 point; a lead needs at least 2/);
 		const { code, stderr } = await checkJson(d);
 		expect(code).toBe(2);
@@ -141,11 +124,8 @@ describe('a degenerate trace', () => {
 	});
 
 	it('with a point that is not a number is named; the file reader refuses it', async () => {
-		const d = withTrace([
-			{ x: 7, y: 7 },
-			{ x: 8, y: Number.NaN }
-		]);
-		const f = glassFindings(d).find((x) => x.code === 'glass.trace-degenerate');
+		const d = withTrace(run(7, 7, 8, Number.NaN));
+		const f = findingOf(d, 'glass.trace-degenerate');
 		expect(f?.message).toMatch(/not a finite number/);
 		expect(f?.location).toBeUndefined();
 		const { code, stderr } = await checkJson(d);
@@ -154,14 +134,8 @@ describe('a degenerate trace', () => {
 	});
 
 	it('on a net the design does not have is named', async () => {
-		const d = withTrace(
-			[
-				{ x: 7, y: 7 },
-				{ x: 7, y: 12 }
-			],
-			{ net: 'seg9' }
-		);
-		const f = glassFindings(d).find((x) => x.code === 'glass.trace-no-net');
+		const d = withTrace(run(7, 7, 7, 12), { net: 'seg9' });
+		const f = findingOf(d, 'glass.trace-no-net');
 		expect(f?.message).toContain('"seg9"');
 		expect((await checkJson(d)).code).toBe(1);
 	});
