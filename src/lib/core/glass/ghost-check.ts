@@ -126,7 +126,7 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 		const pair = crossing.get(`${b.net}\u0000${f.net}`) ?? [];
 		const ownRings = pair.flatMap((e) => outlineOf.get(e.id) ?? []);
 		const electrodes = [...new Set([...f.concerns, ...pair.map((e) => e.id), ...b.concerns])];
-		for (const island of regionToPolygons(overlap)) {
+		for (const island of regionToPolygons(overlap, { clean: true })) {
 			const area =
 				Math.abs(signedArea(island.outer)) -
 				island.holes.reduce((s, h) => s + Math.abs(signedArea(h)), 0);
