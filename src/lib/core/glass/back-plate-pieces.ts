@@ -3,8 +3,9 @@
  * plate covers its segment despite front-to-back registration error (common practice: 0.05–0.15 mm
  * per side). Where an electrode of another common is too close for two full margins plus the
  * minimum gap, the margin of both is cut to (distance − gap) / 2, less two steps of the polygon
- * engine's 10 nm grid so rounding never takes the gap below the minimum, and the pair is reported; where
- * even that leaves nothing (distance below the gap), the two commons' plates would touch.
+ * engine's 10 nm grid so rounding never takes the gap below the minimum, and the pair is
+ * reported; where even that leaves nothing (distance below the gap), the two commons' plates
+ * would touch.
  *
  * An electrode's holes stay holes in its piece, shrunk by the margin (another common's electrode may
  * sit inside one). Curves are flattened to 5 µm; the growth is the polygon engine's offset

@@ -6,10 +6,12 @@
  *
  * Overlaps are intersections by the one polygon engine (`geometry/polygon-clipper.ts`, even-odd,
  * holes counted) of each lead run against the other plate's conductors, and of each electrode
- * against the other plate's leads and transfer points; one ghost per island of overlap. A lead's overlap with the plate of its own electrode's crossing, within reach of
- * that electrode, only extends the electrode and is not reported. Where a ghost lies decides its
- * weight: in the viewing area it is visible; inside the seal but outside the viewing area it
- * switches behind the bezel; under the seal or beyond it there is no liquid crystal.
+ * against the other plate's leads and transfer points; one ghost per island of overlap. A lead's
+ * overlap with the plate of its own electrode's crossing, within reach of that electrode, only
+ * extends the electrode and is not reported. Where a ghost lies decides its weight: in the viewing
+ * area it is visible; inside the seal but outside the viewing area it switches behind the bezel;
+ * under the seal or beyond it there is no liquid crystal. A ghost is named by its electrodes
+ * (`Ghost.electrodes`); which electrodes a lead serves comes from `lead-reach.ts`.
  */
 import type { Design, Electrode, Rect } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
