@@ -146,6 +146,12 @@ describe('integer polygon kernel', () => {
 		expect(polys).toHaveLength(1);
 		expect(polys[0].holes).toHaveLength(1);
 		expect(regionToShapes(frame)[0].holes).toHaveLength(1);
+		// A clean region (a boolean's result) splits the same way, with or without holes.
+		const clean = normalizeRegion(frame);
+		const fast = regionToPolygons(clean, { clean: true });
+		expect(fast.map((p) => p.holes.length)).toEqual([1]);
+		const two = normalizeRegion([square(0, 0, 1), square(3, 0, 1)]);
+		expect(regionToPolygons(two, { clean: true }).map((p) => p.holes.length)).toEqual([0, 0]);
 		// Two squares overlapping by 1 mm², read as one union (non-zero after cleaning each).
 		expect(regionArea_mm2(unionRegions([[square(0, 0, 2)], [square(1, 1, 2)]]))).toBeCloseTo(7, 9);
 		// A figure-eight: the shoelace sum would give 0; the filled area is two triangles of 1 mm².

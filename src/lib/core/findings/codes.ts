@@ -10,6 +10,7 @@ import { VIEW_ANGLE_CODES } from './codes-viewangle';
 import { LOAD_CODES } from './codes-load';
 import { RELIABILITY_CODES } from './codes-reliability';
 import { GLASS_CODES } from './codes-glass';
+import { GLASS_OUTLINE_CODES } from './codes-glass-outline';
 import { FLUID_CODES } from './codes-fluid';
 
 export interface FindingCode {
@@ -25,6 +26,7 @@ export const FINDING_CODES: readonly FindingCode[] = [
 	...LEGIBILITY_CODES,
 	...VIEW_ANGLE_CODES,
 	...GLASS_CODES,
+	...GLASS_OUTLINE_CODES,
 	...RELIABILITY_CODES,
 	...FLUID_CODES
 ];

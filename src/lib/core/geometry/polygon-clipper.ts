@@ -15,6 +15,7 @@
  */
 import ClipperLib from 'clipper-lib';
 import { flattenShape } from './flatten';
+import { signedArea } from './polygon';
 import type { Shape } from './shape';
 
 export const CLIP_UNITS_PER_mm = 1e5;
@@ -174,11 +175,16 @@ export function regionArea_mm2(region: Region, options: { fill?: FillRule } = {}
 	return sum / (CLIP_UNITS_PER_mm * CLIP_UNITS_PER_mm);
 }
 
-/** A clean region split into islands: each outer ring with the holes directly inside it. */
+/**
+ * A region split into islands: each outer ring with the holes directly inside it. A region known
+ * to be clean (`clean: true`, e.g. a boolean's result) with no hole is returned ring by ring.
+ */
 export function regionToPolygons(
 	region: Region,
-	options: { fill?: FillRule } = {}
+	options: { fill?: FillRule; clean?: boolean } = {}
 ): { outer: Float64Array; holes: Float64Array[] }[] {
+	if (options.clean && region.every((r) => signedArea(r) > 0))
+		return region.map((outer) => ({ outer, holes: [] }));
 	const clipper = new ClipperLib.Clipper();
 	clipper.AddPaths(regionToIntPaths(region), ClipperLib.PolyType.ptSubject, true);
 	const tree = new ClipperLib.PolyTree();

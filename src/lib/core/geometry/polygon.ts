@@ -2,7 +2,9 @@
  * Polygon kernels on flat polylines [x0, y0, x1, y1, …] (closed implicitly). Signed area is the
  * shoelace sum ½·Σ(xᵢ·yᵢ₊₁ − xᵢ₊₁·yᵢ); with y pointing down on the glass a positive area means the
  * ring runs clockwise as seen on screen. Point-in-polygon is the even-odd crossing test, so a point
- * inside an outline and inside one of its holes is outside the shape.
+ * inside an outline and inside one of its holes is outside the shape. The centre of area is the
+ * shoelace-weighted vertex sum, C = Σ(pᵢ + pᵢ₊₁)(xᵢyᵢ₊₁ − xᵢ₊₁yᵢ) / (6·A) (standard polygon
+ * centroid formula).
  */
 import { flattenShape } from './flatten';
 import type { Shape } from './shape';
@@ -16,6 +18,29 @@ export function signedArea(ring: Float64Array): number {
 		sum += ring[i] * ring[j + 1] - ring[j] * ring[i + 1];
 	}
 	return sum / 2;
+}
+
+/** Centre of area of a simple ring (either winding); the mean vertex when it has no area. */
+export function ringCentroid(ring: Float64Array): XY {
+	const n = ring.length;
+	let a = 0,
+		cx = 0,
+		cy = 0;
+	for (let i = 0; i < n; i += 2) {
+		const j = (i + 2) % n;
+		const cross = ring[i] * ring[j + 1] - ring[j] * ring[i + 1];
+		a += cross;
+		cx += (ring[i] + ring[j]) * cross;
+		cy += (ring[i + 1] + ring[j + 1]) * cross;
+	}
+	if (a !== 0) return { x: cx / (3 * a), y: cy / (3 * a) };
+	let sx = 0,
+		sy = 0;
+	for (let i = 0; i < n; i += 2) {
+		sx += ring[i];
+		sy += ring[i + 1];
+	}
+	return { x: sx / Math.max(1, n / 2), y: sy / Math.max(1, n / 2) };
 }
 
 /** Filled area of outline minus holes, in mm² (holes assumed inside the outline and disjoint). */

@@ -3,7 +3,8 @@
  * glass: electrodes, their leads, the pads, the landing of each common's transfer point and its
  * lead to the pad) and the common plate (back glass: one back plate per common made of its grown
  * pieces and the leads joining them, and the transfer point). Plates are derived from the drawing
- * every time (so they follow every edit); leads are the design's stored traces.
+ * every time (so they follow every edit); leads are the design's stored traces, less any too far
+ * off the glass to draw (`trace-faults.ts`, which reports them).
  *
  * Every conductor is a list of flat rings in millimetres; an electrode's rings are filled even-odd
  * (outline and holes), every other conductor's rings are filled non-zero (overlapping leads).
@@ -14,6 +15,7 @@ import { flattenContour } from '../geometry/flatten';
 import { platePieces, PLATE_FLATTEN_um, type MarginConflict } from './back-plate-pieces';
 import { glassLayout, type GlassLayout } from './layout';
 import { rectRing } from './rings';
+import { traceDrawable } from './trace-faults';
 import { traceRings } from './trace-rings';
 import { dotRing, transferPoints } from './transfer-points';
 
@@ -51,7 +53,7 @@ export function buildArtwork(design: Design): GlassArtwork {
 	const { pieces, conflicts } = platePieces(design);
 	const tracesOf = (plate: Plate, net: string): Conductor[] =>
 		design.glassArt.traces
-			.filter((t) => t.plate === plate && t.net === net)
+			.filter((t) => t.plate === plate && t.net === net && traceDrawable(t, layout.glass))
 			.map((t) => ({
 				id: t.id,
 				name: t.id,

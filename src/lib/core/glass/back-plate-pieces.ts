@@ -2,26 +2,34 @@
  * The common plate's pieces: each electrode's outline grown by the overlap margin, so the back
  * plate covers its segment despite front-to-back registration error (common practice: 0.05–0.15 mm
  * per side). Where an electrode of another common is too close for two full margins plus the
- * minimum gap, the margin of both is cut to (distance − gap) / 2 and the pair is reported; where
- * even that leaves nothing (distance below the gap), the two commons' plates would touch.
+ * minimum gap, the margin of both is cut to (distance − gap) / 2, less two steps of the polygon
+ * engine's 10 nm grid so rounding never takes the gap below the minimum, and the pair is
+ * reported; where even that leaves nothing (distance below the gap), the two commons' plates
+ * would touch.
  *
  * An electrode's holes stay holes in its piece, shrunk by the margin (another common's electrode may
- * sit inside one). Curves are flattened to 5 µm.
+ * sit inside one). Curves are flattened to 5 µm; the growth is the polygon engine's offset
+ * (`geometry/polygon-clipper.ts`) with mitred corners, squared off where a mitre would reach
+ * beyond twice the margin, so sharp corners do not spike.
  */
 import type { Design, Electrode } from '../design/schema';
 import type { Bounds } from '../geometry/bounds';
 import { flattenContour } from '../geometry/flatten';
 import { minimumGapBetweenRings } from '../geometry/minimum-gap';
-import { boundsOverlap, offsetRing, ringBounds } from './rings';
+import { CLIP_UNITS_PER_mm, offsetRegion } from '../geometry/polygon-clipper';
+import { signedArea } from '../geometry/polygon';
+import { boundsOverlap, ringBounds } from './rings';
 
 export const PLATE_FLATTEN_um = 5;
+/** Two grid steps of the polygon engine: the most its rounding can take off a gap between pieces. */
+const GRID_SLACK_mm = 2 / CLIP_UNITS_PER_mm;
 
 export interface PlatePiece {
 	electrode: Electrode;
 	common: string;
 	/** The electrode's flattened outline and holes. */
 	rings: Float64Array[];
-	/** The grown outline, then the shrunk holes (even-odd). */
+	/** The grown outline (the largest outer ring), then the shrunk holes and any other ring (even-odd). */
 	grown: Float64Array[];
 	margin_mm: number;
 }
@@ -31,6 +39,20 @@ export interface MarginConflict {
 	distance_mm: number;
 	/** True when the two plates cannot be kept apart by the minimum gap at all. */
 	touching: boolean;
+}
+
+/**
+ * The electrode's rings grown by `margin_mm`: outline out, holes in, largest outer ring first. An
+ * outline with no area grows into nothing; its flattened outline stands in, so every piece has a
+ * first ring (the glass check names the outline).
+ */
+function grownPiece(rings: Float64Array[], margin_mm: number): Float64Array[] {
+	const grown = offsetRegion(rings, { delta_mm: margin_mm, join: 'miter', miterLimit: 2 });
+	const first = grown.reduce(
+		(best, r, k) => (signedArea(r) > signedArea(grown[best]) ? k : best),
+		0
+	);
+	return grown.length === 0 ? [rings[0]] : [grown[first], ...grown.filter((_, k) => k !== first)];
 }
 
 export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: MarginConflict[] } {
@@ -55,7 +77,7 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 			if (!boundsOverlap(bounds[i], bounds[j], reach)) continue;
 			const d = minimumGapBetweenRings(outlines[i], outlines[j]);
 			if (d >= reach) continue;
-			const cut = Math.max(0, (d - gap) / 2);
+			const cut = Math.max(0, (d - gap) / 2 - GRID_SLACK_mm);
 			allowed[i] = Math.min(allowed[i], cut);
 			allowed[j] = Math.min(allowed[j], cut);
 			conflicts.push({
@@ -69,7 +91,7 @@ export function platePieces(design: Design): { pieces: PlatePiece[]; conflicts: 
 		electrode,
 		common: electrode.common as string,
 		rings: outlines[i],
-		grown: outlines[i].map((r, k) => offsetRing(r, k === 0 ? allowed[i] : -allowed[i])),
+		grown: grownPiece(outlines[i], allowed[i]),
 		margin_mm: allowed[i]
 	}));
 	return { pieces, conflicts };

@@ -1,8 +1,9 @@
 /**
  * The glass check: everything that only shows on real glass, as findings — back-plate margins and
  * touching commons, opens and shorts on each plate, leads too close, ghosts (visible, behind the
- * bezel, under the seal), bad outlines, and the ledge against its connector (common practice:
- * elastomeric ledge ≥ 3 mm and pitch ≥ 0.5 mm; metal pins at 1.5, 1.8, 2.0 or 2.54 mm).
+ * bezel, under the seal), bad outlines, bad leads (off the glass, degenerate, on no net), and the
+ * ledge against its connector (common practice: elastomeric ledge ≥ 3 mm and pitch ≥ 0.5 mm;
+ * metal pins at 1.5, 1.8, 2.0 or 2.54 mm).
  */
 import {
 	ELASTOMERIC_MIN_LEDGE_mm,
@@ -16,6 +17,7 @@ import { plateConnectivity } from './connectivity';
 import { ghostCheck, type Ghost } from './ghost-check';
 import { ghostFindings } from './ghost-findings';
 import { outlineFaults } from './outline-faults';
+import { traceFindings } from './trace-findings';
 
 export interface GlassReport {
 	artwork: GlassArtwork;
@@ -79,7 +81,7 @@ function ledgeFindings(design: Design, art: GlassArtwork): Finding[] {
 
 export function checkGlass(design: Design): GlassReport {
 	const art = buildArtwork(design);
-	const findings: Finding[] = [...ledgeFindings(design, art)];
+	const findings: Finding[] = [...ledgeFindings(design, art), ...traceFindings(design, art.layout)];
 	for (const f of outlineFaults(design, art.layout.sealInner)) {
 		const name = f.electrode.name || f.electrode.id;
 		findings.push(

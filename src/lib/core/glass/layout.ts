@@ -3,14 +3,16 @@
  * (the front glass less the ledge), the seal ring inside it with its fill gap, the pads along the
  * ledge at the pin pitch and the default common transfer points in the seal.
  *
- * Pads are derived from `design.pinout` and the design's commons and segment lines in use: commons
- * first, last or split to both ends, centred on the edge. A pad is half the pitch wide (common
- * practice for elastomeric connectors) and spans the ledge less 0.2 mm at each end.
+ * Pads sit at the pins of the pin map (`wiring/pin-layout.ts`, the one source of the pin order and
+ * positions): pad k is pin k, for every common and every segment line, used or not, so the glass
+ * and the pin map never disagree. A pad is half the pitch wide (common practice for elastomeric
+ * connectors) and spans the ledge less 0.2 mm at each end.
  *
  * Units: millimetres, glass coordinates (x right, y down, origin top-left).
  */
 import type { Design, Rect } from '../design/schema';
 import type { XY } from '../geometry/vec';
+import { pinLayout } from '../wiring/pin-layout';
 
 export interface Pad {
 	/** Pin number, 1-based, in order along the edge. */
@@ -71,31 +73,6 @@ const inset = (r: Rect, d: number): Rect => ({
 	height_mm: Math.max(0, r.height_mm - 2 * d)
 });
 
-/** Pins in order along the edge: commons and the segment lines that drive an electrode. */
-export function pinOrder(
-	design: Design
-): { kind: 'common' | 'segment'; id: string; name: string }[] {
-	const used = new Set(design.electrodes.map((e) => e.line));
-	const lines = design.segmentLines
-		.filter((l) => used.has(l.id))
-		.map((l) => ({ kind: 'segment' as const, id: l.id, name: l.name || l.id }));
-	const commons = design.commons.map((c) => ({
-		kind: 'common' as const,
-		id: c.id,
-		name: c.name || c.id
-	}));
-	switch (design.pinout.order) {
-		case 'commons-first':
-			return [...commons, ...lines];
-		case 'commons-last':
-			return [...lines, ...commons];
-		case 'commons-split': {
-			const half = Math.ceil(commons.length / 2);
-			return [...commons.slice(0, half), ...lines, ...commons.slice(half)];
-		}
-	}
-}
-
 function sealParts(outer: Rect, width_mm: number, gap: { edge: string; gap_mm: number }): Rect[] {
 	const { x_mm: x, y_mm: y, width_mm: W, height_mm: H } = outer;
 	const w = width_mm;
@@ -141,17 +118,14 @@ export function glassLayout(design: Design): GlassLayout {
 	const backGlass = rectOf(frame, 0, art.ledge.depth_mm, length_mm, depth);
 	const sealOuter = inset(backGlass, art.seal.inset_mm);
 	const sealInner = inset(sealOuter, art.seal.width_mm);
-	const pitch = design.pinout.pitch_mm;
-	const pins = pinOrder(design);
-	const start = (length_mm - (pins.length - 1) * pitch) / 2;
-	const padWidth = pitch / 2;
-	const pads: Pad[] = pins.map((pin, i) => {
-		const u = start + i * pitch;
+	const padWidth = design.pinout.pitch_mm / 2;
+	const pads: Pad[] = pinLayout(design).pins.map((pin) => {
+		const u = pin.along_mm;
 		return {
-			pin: i + 1,
-			kind: pin.kind,
-			net: pin.id,
-			name: pin.name,
+			pin: pin.number,
+			kind: pin.role === 'common' ? 'common' : 'segment',
+			net: pin.ref.id,
+			name: pin.ref.name || pin.ref.id,
 			rect: rectOf(frame, u - padWidth / 2, 0.2, u + padWidth / 2, art.ledge.depth_mm - 0.2),
 			entry: frame(u, art.ledge.depth_mm - 0.2)
 		};
