@@ -60,7 +60,7 @@ export function ghostFindings(ghosts: readonly Ghost[]): Finding[] {
 				finding({
 					code: 'glass.ghost-idle',
 					severity: 'pass',
-					message: `${what} cross ${pair}, a pair no electrode uses: it is never selected, so they stay dark.`,
+					message: `${what} ${list.length > 1 ? 'cross' : 'crosses'} ${pair}, a pair no electrode uses: it is never selected, so ${list.length > 1 ? 'they stay' : 'it stays'} dark.`,
 					fix: `Keep ${pair} unassigned, or reroute the ${g.lineName} lead before giving that pair an electrode.`,
 					electrodes,
 					location
