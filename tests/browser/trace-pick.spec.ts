@@ -74,4 +74,11 @@ test('a trace picked on the drawing shows its properties, takes a new width, and
 	await expect(props).toHaveCount(0);
 	await page.getByTestId('action-undo').click();
 	await expect(status).toContainText('Undo: Generate plates and traces');
+
+	// the panel's Remove button does the same
+	await page.mouse.click(box.x + offsetX + middle.x * scale, box.y + offsetY + middle.y * scale);
+	await expect(props).toHaveAttribute('data-trace', lead.id);
+	await page.getByTestId('trace-delete').click();
+	await expect(status).toContainText('Undo: Delete trace');
+	await expect(props).toHaveCount(0);
 });
