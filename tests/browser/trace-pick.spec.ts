@@ -52,6 +52,7 @@ test('a trace picked on the drawing shows its properties, takes a new width, and
 	await expect(props).toBeVisible();
 	await expect(props).toHaveAttribute('data-trace', lead.id);
 	await expect(page.getByTestId('properties')).toContainText('trace');
+	await expect(page.getByTestId('status')).toContainText('1 trace selected');
 	await expect(page.getByTestId('trace-plate')).toHaveText('segment');
 	await expect(page.getByTestId('trace-net')).toHaveText('SEG1');
 	await expect(page.getByTestId('trace-points')).toHaveText(String(lead.points.length));
