@@ -66,6 +66,36 @@ describe('traces in the pick tool', () => {
 		expect(pointsOf(h.session.design)).toEqual(pointsOf(withTrace()));
 	});
 
+	it('several picked traces drag together; a plain click keeps only the one clicked', () => {
+		const other: Trace = {
+			...lead,
+			id: 'ts-seg2-1',
+			net: 'seg2',
+			points: [
+				{ x: 50, y: 30 },
+				{ x: 50, y: 40 }
+			]
+		};
+		const base = withTrace();
+		const h = harness({ ...base, glassArt: { ...base.glassArt, traces: [lead, other] } }, shown);
+		const p = h.pointer(new PickTool());
+		p.click(30, 35);
+		p.click(50, 35, { shift: true });
+		expect(h.editor.nodeSelection.size).toBe(5);
+		p.drag([50, 35], [51, 35]);
+		const xs = (d: Design) => d.glassArt.traces.map((t) => t.points.map((q) => q.x));
+		expect(xs(h.session.design)).toEqual([
+			[31, 31, 41],
+			[51, 51]
+		]);
+		expect(h.session.history.undoLabel).toBe('Move trace');
+		p.click(51, 35);
+		expect([...h.editor.nodeSelection]).toEqual(allTraceNodeKeys(other));
+		// a selection box on empty glass drops the picked trace
+		p.drag([60, 60], [70, 70]);
+		expect(h.editor.nodeSelection.size).toBe(0);
+	});
+
 	it('Delete removes the picked trace, and undo brings it back', () => {
 		const h = harness(withTrace(), shown);
 		const tool = new PickTool();

@@ -14,6 +14,7 @@ import { rectFromCorners } from '../overlay';
 import {
 	deletePickedTraces,
 	dragTrace,
+	keepOnlyTrace,
 	pickTraceAt,
 	startTraceMove,
 	type TraceMove
@@ -92,6 +93,7 @@ export class PickTool implements Tool {
 			const rect = rectFromCorners(s.start, input.point);
 			const ids = ctx.inRect(rect, input.point.x >= s.start.x ? 'contains' : 'intersects');
 			ctx.setSelection(s.shift ? [...ctx.selection, ...ids] : ids);
+			if (!s.shift) ctx.setNodeSelection([]);
 			ctx.clearOverlay();
 		}
 		this.#state = { name: 'idle' };
@@ -130,7 +132,10 @@ export class PickTool implements Tool {
 	}
 
 	#click(ctx: ToolContext, s: Extract<State, { name: 'pointing' }>) {
-		if (s.traceId) return;
+		if (s.traceId) {
+			if (!s.shift) keepOnlyTrace(ctx, s.traceId);
+			return;
+		}
 		if (!s.hitId) {
 			if (s.shift) return;
 			ctx.setSelection([]);

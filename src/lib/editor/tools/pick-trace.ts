@@ -11,17 +11,32 @@ import { activeTraces, allTraceNodeKeys, traceEdgeAt, traceNodeAt } from '../tra
 import type { ToolContext } from './tool';
 import { REACH_px } from './points-state';
 
-/** Picks the trace under the point (shift adds it); returns its id, or null when none is there. */
+/**
+ * Picks the trace under the point (shift adds it; pressing one of several picked traces keeps
+ * them all, so they drag together); returns its id, or null when no trace is there.
+ */
 export function pickTraceAt(ctx: ToolContext, at: XY, shift: boolean): string | null {
 	if (!ctx.tracesEditable) return null;
 	const traces = ctx.design.glassArt.traces;
 	const hit = traceEdgeAt({ traces, at, reach_mm: REACH_px / ctx.scale_px_per_mm });
 	if (!hit) return null;
-	const whole = allTraceNodeKeys(traces.find((t) => t.id === hit.traceId)!);
+	const whole = traceKeys(ctx, hit.traceId);
 	ctx.setSelection([]);
-	ctx.setNodeSelection(shift ? [...ctx.nodeSelection, ...whole] : whole);
+	if (!whole.every((k) => ctx.nodeSelection.has(k)))
+		ctx.setNodeSelection(shift ? [...ctx.nodeSelection, ...whole] : whole);
 	return hit.traceId;
 }
+
+/** A click (no drag) on one of several picked traces keeps only that one. */
+export function keepOnlyTrace(ctx: ToolContext, traceId: string): void {
+	const whole = traceKeys(ctx, traceId);
+	if (whole.length > 0 && whole.length < ctx.nodeSelection.size) ctx.setNodeSelection(whole);
+}
+
+const traceKeys = (ctx: ToolContext, traceId: string): string[] => {
+	const trace = ctx.design.glassArt.traces.find((t) => t.id === traceId);
+	return trace ? allTraceNodeKeys(trace) : [];
+};
 
 export interface TraceMove {
 	name: 'movingTrace';
