@@ -5,7 +5,7 @@
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { DesignAnalysis, type DesignWorkerLike } from '../../src/lib/state/design-analysis.svelte';
-import { analyzeDesign } from '../../src/lib/core/analyze-design';
+import { designCheckJob } from '../../src/lib/workers/design-check-job';
 import { demoDesign } from '../../src/lib/core/design/demo';
 import type { DesignRequest, DesignResponse } from '../../src/lib/workers/design-protocol';
 
@@ -22,9 +22,9 @@ class HeldWorker implements DesignWorkerLike {
 	}
 	/** Answers a request as the real worker would. */
 	answer(request: DesignRequest) {
-		const report = analyzeDesign(request.design, request.inputs);
+		const result = designCheckJob(request);
 		this.onmessage?.({
-			data: { id: request.id, kind: 'result', report, elapsed_ms: 1 }
+			data: { id: request.id, kind: 'result', ...result, elapsed_ms: 1 }
 		} as MessageEvent<DesignResponse>);
 	}
 }

@@ -6,14 +6,22 @@
  * latest waiting design is sent next; a worker still busy after STUCK_MS is replaced. Should the worker itself fail to run, the report is computed here instead,
  * so the checks are never lost; should the checks themselves throw, `failure` says so and the
  * last report stays (an internal error is never shown as a verdict).
+ *
+ * The glass check runs once per design, inside the same job, and its full result (findings,
+ * artwork, ghosts) is kept beside the report tagged with the design it belongs to: the glass panel
+ * and the canvas ask `glassFor(design)` and get nothing for a design the check has not seen yet,
+ * so a stale ghost is never drawn over a newer drawing.
  */
-import { analyzeDesign, type DesignReport } from '$lib/core/analyze-design';
+import { getContext, setContext } from 'svelte';
+import type { DesignReport } from '$lib/core/analyze-design';
 import type { Design } from '$lib/core/design/schema';
+import type { GlassReport } from '$lib/core/glass/check-glass';
 import type {
 	DesignCheckInputs,
 	DesignRequest,
 	DesignResponse
 } from '$lib/workers/design-protocol';
+import { designCheckJob } from '$lib/workers/design-check-job';
 import { createDesignWorker } from '$lib/workers/create-design-worker';
 
 const DEBOUNCE_MS = 40;
@@ -25,8 +33,17 @@ export type DesignWorkerLike = Pick<Worker, 'postMessage' | 'terminate'> & {
 	onerror: ((event: ErrorEvent) => void) | null;
 };
 
+/** A glass check and the design (by identity: designs are never mutated) and request it ran for. */
+export interface GlassView {
+	revision: number;
+	design: Design;
+	report: GlassReport;
+}
+
 export class DesignAnalysis {
 	report = $state.raw<DesignReport>() as DesignReport;
+	/** The latest glass check; it may belong to an older design than the open one. */
+	glass = $state.raw<GlassView | null>(null);
 	/** True from a change until the report for it arrives. */
 	busy = $state(false);
 	/** Set when the worker failed and the report was computed on the page instead. */
@@ -39,6 +56,9 @@ export class DesignAnalysis {
 	#latest = 0;
 	#running = 0;
 	#pending: DesignRequest | null = null;
+	/** The designs as given (the requests carry snapshots), by request id. */
+	// eslint-disable-next-line svelte/prefer-svelte-reactivity -- bookkeeping, never rendered
+	#origins = new Map<number, Design>();
 	#timer: ReturnType<typeof setTimeout> | undefined;
 	#stuckTimer: ReturnType<typeof setTimeout> | undefined;
 
@@ -47,9 +67,15 @@ export class DesignAnalysis {
 		inputs: DesignCheckInputs,
 		options: { createWorker?: () => DesignWorkerLike } = {}
 	) {
-		this.report = analyzeDesign(design, inputs);
+		this.#accept(0, design, designCheckJob({ id: 0, design, inputs }));
 		this.#create =
 			options.createWorker ?? (() => createDesignWorker() as unknown as DesignWorkerLike);
+	}
+
+	/** The glass check of exactly this design, or null until it has been checked. */
+	glassFor(design: Design): GlassReport | null {
+		const view = this.glass;
+		return view && view.design === design ? view.report : null;
 	}
 
 	/** Call from the browser only; returns a cleanup. */
@@ -69,6 +95,8 @@ export class DesignAnalysis {
 			design: $state.snapshot(design) as Design,
 			inputs: $state.snapshot(inputs) as DesignCheckInputs
 		};
+		if (this.#pending) this.#origins.delete(this.#pending.id);
+		this.#origins.set(request.id, design);
 		if (!this.#worker) {
 			this.#computeHere(request);
 			return;
@@ -109,11 +137,21 @@ export class DesignAnalysis {
 
 	#computeHere(request: DesignRequest) {
 		try {
-			this.report = analyzeDesign(request.design, request.inputs);
+			this.#accept(request.id, this.#origin(request), designCheckJob(request));
 			this.failure = null;
 		} catch (error) {
 			this.failure = error instanceof Error ? error.message : String(error);
 		}
+		this.#origins.delete(request.id);
+	}
+
+	#origin(request: DesignRequest): Design {
+		return this.#origins.get(request.id) ?? request.design;
+	}
+
+	#accept(revision: number, design: Design, result: { report: DesignReport; glass: GlassReport }) {
+		this.report = result.report;
+		this.glass = { revision, design, report: result.glass };
 	}
 
 	/** The worker cannot run: compute the latest request here and keep going without it. */
@@ -132,15 +170,22 @@ export class DesignAnalysis {
 		if (message.id !== this.#running) return;
 		this.#running = 0;
 		clearTimeout(this.#stuckTimer);
+		const design = this.#origins.get(message.id);
+		this.#origins.delete(message.id);
 		// An answer for a design edited since is dropped; the newest waiting one goes next.
-		if (message.id !== this.#latest) return void this.#pump();
+		if (message.id !== this.#latest || !design) return void this.#pump();
 		this.#pending = null;
 		this.busy = false;
 		if (message.kind === 'result') {
-			this.report = message.report;
+			this.#accept(message.id, design, message);
 			this.failure = null;
 		} else {
 			this.failure = message.message;
 		}
 	}
 }
+
+const KEY = Symbol('design-analysis');
+export const setDesignAnalysis = (analysis: DesignAnalysis) => setContext(KEY, analysis);
+/** The page's design checks; undefined outside the app page (e.g. a component test). */
+export const getDesignAnalysis = () => getContext<DesignAnalysis | undefined>(KEY);

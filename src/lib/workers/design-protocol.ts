@@ -1,7 +1,8 @@
-/** Messages between the page and the design-check worker (wiring, drive, rules, load, legibility). */
+/** Messages between the page and the design-check worker (wiring, drive, rules, load, legibility, glass). */
 import type { Design } from '$lib/core/design/schema';
 import type { CellReport } from '$lib/core/cell/analyze-cell';
 import type { DesignReport } from '$lib/core/analyze-design';
+import type { GlassReport } from '$lib/core/glass/check-glass';
 
 export interface DesignCheckInputs {
 	cell: CellReport | null;
@@ -15,6 +16,12 @@ export interface DesignRequest {
 	inputs: DesignCheckInputs;
 }
 
+/** The design report and the full glass check it was built from (artwork, ghosts, findings). */
+export interface DesignResult {
+	report: DesignReport;
+	glass: GlassReport;
+}
+
 export type DesignResponse =
-	| { id: number; kind: 'result'; report: DesignReport; elapsed_ms: number }
+	| ({ id: number; kind: 'result'; elapsed_ms: number } & DesignResult)
 	| { id: number; kind: 'error'; message: string };

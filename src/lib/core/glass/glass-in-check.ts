@@ -6,7 +6,7 @@
  */
 import type { Design } from '../design/schema';
 import type { Finding } from '../findings/finding';
-import { checkGlass } from './check-glass';
+import { checkGlass, type GlassReport } from './check-glass';
 
 export interface GlassCheckSummary {
 	findings: Finding[];
@@ -20,8 +20,15 @@ export function hasGlassDrawing(design: Design): boolean {
 }
 
 export function glassInCheck(design: Design): GlassCheckSummary | null {
+	return hasGlassDrawing(design) ? glassSummary(design, checkGlass(design)) : null;
+}
+
+/**
+ * The design check's part of a glass check already run on this design (the app runs it once per
+ * edit and shares it with the glass panel and the canvas); null while the design has no drawing.
+ */
+export function glassSummary(design: Design, report: GlassReport): GlassCheckSummary | null {
 	if (!hasGlassDrawing(design)) return null;
-	const report = checkGlass(design);
 	return {
 		findings: report.findings,
 		traces: design.glassArt.traces.length,
