@@ -3,6 +3,7 @@
  * commons by row, one segment line per four electrodes, pins along the bottom edge.
  */
 import { demoDesign } from '../src/lib/core/design/demo';
+import { DEFAULT_GLASS_ART } from '../src/lib/core/design/glass-art-schema';
 import type { Design, Electrode } from '../src/lib/core/design/schema';
 
 export function benchGlassDesign(count: number): Design {
@@ -47,6 +48,7 @@ export function benchGlassDesign(count: number): Design {
 		electrodes,
 		groups: [],
 		pinout: { ...demo.pinout, pitch_mm: 0.5 },
-		glassArt: { ...demo.glassArt, transfers: [], traces: [] }
+		// The default glass settings (0.1 mm leads and margins), whatever the demo uses.
+		glassArt: { ...DEFAULT_GLASS_ART, transfers: [], traces: [] }
 	};
 }
