@@ -12,78 +12,41 @@
  * ignored), which the distance estimate steers tightly: the lead exists, it may light more ghosts.
  */
 import { FREE, type RouteGrid } from './route-grid';
+import { scratchFor, type SearchScratch } from './search-scratch';
 
 const BEND_COST = 4;
 /** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
 const HEURISTIC_WEIGHT = 1;
 /** Queue pops the costed search may take before the plain shortest path is taken instead. */
 const COSTED_POPS = 60_000;
-const DX = [1, -1, 0, 0];
-const DY = [0, 0, 1, -1];
+const DX = Int32Array.of(1, -1, 0, 0);
+const DY = Int32Array.of(0, 0, 1, -1);
+/** Local copy: a module-level constant reads cheaper in the hot loops than an imported binding. */
+const FREE_CELL: number = FREE;
 
 /** Scratch arrays reused between searches on the same grid. */
 export class GridSearch {
-	private readonly dist: Float64Array;
-	private readonly prev: Int32Array;
-	private readonly stamp: Uint32Array;
-	private epoch = 0;
-	private readonly floodStamp: Uint32Array;
-	private readonly floodQueue: Int32Array;
-	private readonly floodStampB: Uint32Array;
-	private readonly floodQueueB: Int32Array;
-	private floodEpoch = 0;
-	private heapCost: Float64Array = new Float64Array(1024);
-	private heapState: Int32Array = new Int32Array(1024);
-	private heapSize = 0;
+	private readonly scratch: SearchScratch;
+	/** Queue pops over all of this object's searches (for profiling). */
+	pops = 0;
+	private boxes = new Int32Array(32);
+	private boxCount = 0;
 
 	constructor(private readonly grid: RouteGrid) {
-		const states = grid.nx * grid.ny * 4;
-		this.dist = new Float64Array(states);
-		this.prev = new Int32Array(states);
-		this.stamp = new Uint32Array(states);
-		this.floodStamp = new Uint32Array(grid.nx * grid.ny);
-		this.floodQueue = new Int32Array(grid.nx * grid.ny);
-		this.floodStampB = new Uint32Array(grid.nx * grid.ny);
-		this.floodQueueB = new Int32Array(grid.nx * grid.ny);
+		this.scratch = scratchFor(grid.nx * grid.ny);
 	}
 
 	/** Whether the last fill that found no way ran dry on the sources' side and swept `cell`. */
 	floodedInVain(cell: number): boolean {
-		return this.sourceSideDry && this.floodStamp[cell] === this.floodEpoch;
+		const { scratch } = this;
+		return (
+			this.sourceSideDry &&
+			scratch.floodOwner === this &&
+			scratch.floodA[cell] === scratch.floodMark
+		);
 	}
 
 	private sourceSideDry = false;
-
-	/** Adds the passable, unseen neighbours of `cell` to one side's queue; true when the sides meet. */
-	private spread(options: {
-		cell: number;
-		net: number;
-		mine: Uint32Array;
-		theirs: Uint32Array | null;
-		target: Uint8Array | null;
-		queue: Int32Array;
-		tail: number;
-	}): number {
-		const { grid } = this;
-		const { cell, net, mine, theirs, target, queue } = options;
-		const mark = this.floodEpoch;
-		let tail = options.tail;
-		const ix = cell % grid.nx;
-		const iy = (cell - ix) / grid.nx;
-		for (let h = 0; h < 4; h++) {
-			const jx = ix + DX[h],
-				jy = iy + DY[h];
-			if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
-			const next = jy * grid.nx + jx;
-			if (mine[next] === mark) continue;
-			if ((target && target[next]) || (theirs && theirs[next] === mark)) return -1;
-			const o = grid.owner[next];
-			if (o !== FREE && o !== net) continue;
-			mine[next] = mark;
-			queue[tail++] = next;
-		}
-		return tail;
-	}
 
 	/**
 	 * Whether some target cell can be reached from the sources through cells passable for `net`.
@@ -96,9 +59,11 @@ export class GridSearch {
 		net: number;
 		targetCells?: readonly number[];
 	}): boolean {
-		const { floodStamp: a, floodStampB: b, floodQueue: qa, floodQueueB: qb } = this;
+		const { floodA: a, floodB: b, queueA: qa, queueB: qb } = this.scratch;
+		const { nx, ny, owner } = this.grid;
 		const { sources, target, net } = options;
-		const mark = ++this.floodEpoch;
+		const mark = this.scratch.nextFloodMark();
+		this.scratch.floodOwner = this;
 		this.sourceSideDry = false;
 		let ha = 0,
 			ta = 0,
@@ -115,73 +80,60 @@ export class GridSearch {
 			b[c] = mark;
 			qb[tb++] = c;
 		}
-		const theirs = twoSided ? b : null;
 		for (;;) {
 			if (ha === ta) {
 				this.sourceSideDry = true;
 				return false;
 			}
-			ta = this.spread({ cell: qa[ha++], net, mine: a, theirs, target, queue: qa, tail: ta });
-			if (ta < 0) return true;
+			// One cell of the sources' side: a target or the other side's mark ends the fill.
+			let cell = qa[ha++];
+			let ix = cell % nx;
+			let iy = (cell - ix) / nx;
+			for (let h = 0; h < 4; h++) {
+				const jx = ix + DX[h],
+					jy = iy + DY[h];
+				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
+				const next = jy * nx + jx;
+				if (a[next] === mark) continue;
+				if (target[next] || (twoSided && b[next] === mark)) return true;
+				const o = owner[next];
+				if (o !== FREE_CELL && o !== net) continue;
+				a[next] = mark;
+				qa[ta++] = next;
+			}
 			if (!twoSided) continue;
 			if (hb === tb) {
 				// The target's region is complete: the sources reach it only through a neighbour in it.
-				for (const c of sources)
-					if (this.spread({ cell: c, net, mine: a, theirs: b, target, queue: qa, tail: 0 }) < 0)
-						return true;
+				for (const c of sources) {
+					const cx = c % nx;
+					const cy = (c - cx) / nx;
+					for (let h = 0; h < 4; h++) {
+						const jx = cx + DX[h],
+							jy = cy + DY[h];
+						if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
+						const next = jy * nx + jx;
+						if (a[next] !== mark && (target[next] || b[next] === mark)) return true;
+					}
+				}
 				return false;
 			}
-			tb = this.spread({
-				cell: qb[hb++],
-				net,
-				mine: b,
-				theirs: a,
-				target: null,
-				queue: qb,
-				tail: tb
-			});
-			if (tb < 0) return true;
+			// One cell of the targets' side.
+			cell = qb[hb++];
+			ix = cell % nx;
+			iy = (cell - ix) / nx;
+			for (let h = 0; h < 4; h++) {
+				const jx = ix + DX[h],
+					jy = iy + DY[h];
+				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
+				const next = jy * nx + jx;
+				if (b[next] === mark) continue;
+				if (a[next] === mark) return true;
+				const o = owner[next];
+				if (o !== FREE_CELL && o !== net) continue;
+				b[next] = mark;
+				qb[tb++] = next;
+			}
 		}
-	}
-
-	private push(cost: number, state: number): void {
-		if (this.heapSize === this.heapCost.length) {
-			const c = new Float64Array(this.heapSize * 2);
-			c.set(this.heapCost);
-			const s = new Int32Array(this.heapSize * 2);
-			s.set(this.heapState);
-			this.heapCost = c;
-			this.heapState = s;
-		}
-		let i = this.heapSize++;
-		while (i > 0) {
-			const parent = (i - 1) >> 1;
-			if (this.heapCost[parent] <= cost) break;
-			this.heapCost[i] = this.heapCost[parent];
-			this.heapState[i] = this.heapState[parent];
-			i = parent;
-		}
-		this.heapCost[i] = cost;
-		this.heapState[i] = state;
-	}
-
-	private pop(): number {
-		const top = this.heapState[0];
-		const lastCost = this.heapCost[--this.heapSize];
-		const lastState = this.heapState[this.heapSize];
-		let i = 0;
-		for (;;) {
-			let child = 2 * i + 1;
-			if (child >= this.heapSize) break;
-			if (child + 1 < this.heapSize && this.heapCost[child + 1] < this.heapCost[child]) child++;
-			if (this.heapCost[child] >= lastCost) break;
-			this.heapCost[i] = this.heapCost[child];
-			this.heapState[i] = this.heapState[child];
-			i = child;
-		}
-		this.heapCost[i] = lastCost;
-		this.heapState[i] = lastState;
-		return top;
 	}
 
 	/**
@@ -204,6 +156,24 @@ export class GridSearch {
 		);
 	}
 
+	/** Distance estimate from cell (ix, iy) to the nearest of the current boxes, in cells. */
+	private estimate(ix: number, iy: number): number {
+		const b = this.boxes;
+		let best = Infinity;
+		for (let k = 0; k < this.boxCount * 4; k += 4) {
+			const dx = b[k] - ix > 0 ? b[k] - ix : ix - b[k + 2] > 0 ? ix - b[k + 2] : 0;
+			const dy = b[k + 1] - iy > 0 ? b[k + 1] - iy : iy - b[k + 3] > 0 ? iy - b[k + 3] : 0;
+			if (dx + dy < best) best = dx + dy;
+		}
+		return best === Infinity ? 0 : best * HEURISTIC_WEIGHT;
+	}
+
+	private setBoxes(boxes: readonly (readonly [number, number, number, number])[]): void {
+		if (this.boxes.length < boxes.length * 4) this.boxes = new Int32Array(boxes.length * 8);
+		boxes.forEach((box, k) => this.boxes.set(box, k * 4));
+		this.boxCount = boxes.length;
+	}
+
 	private leastCost(options: {
 		sources: readonly number[];
 		target: Uint8Array;
@@ -212,60 +182,51 @@ export class GridSearch {
 		useCost: boolean;
 		maxPops: number;
 	}): number[] | null {
-		const { grid } = this;
-		const { sources, target, net, boxes, useCost } = options;
-		let budget = options.maxPops;
-		const estimate = (cell: number) => {
-			const ix = cell % grid.nx;
-			const iy = (cell - ix) / grid.nx;
-			let best = Infinity;
-			for (const b of boxes) {
-				const d = Math.max(0, b[0] - ix, ix - b[2]) + Math.max(0, b[1] - iy, iy - b[3]);
-				if (d < best) best = d;
-			}
-			return best === Infinity ? 0 : best * HEURISTIC_WEIGHT;
-		};
-		this.epoch++;
-		this.heapSize = 0;
-		const seen = (s: number) => this.stamp[s] === this.epoch;
+		const { nx, ny, owner } = this.grid;
+		const cost = options.useCost ? this.grid.cost : null;
+		const { sources, target, net } = options;
+		const { dist, prev, stamp, queue: heap } = this.scratch;
+		this.setBoxes(options.boxes);
+		const epoch = this.scratch.nextEpoch();
+		heap.clear();
 		for (const cell of sources) {
+			const ix = cell % nx;
+			const f = this.estimate(ix, (cell - ix) / nx);
 			for (let h = 0; h < 4; h++) {
 				const s = cell * 4 + h;
-				this.stamp[s] = this.epoch;
-				this.dist[s] = 0;
-				this.prev[s] = -1;
-				this.push(estimate(cell), s);
+				stamp[s] = epoch;
+				dist[s] = 0;
+				prev[s] = -1;
+				heap.push(f, 0, s);
 			}
 		}
-		while (this.heapSize > 0) {
+		let budget = options.maxPops;
+		while (heap.size > 0) {
 			if (budget-- <= 0) return null;
-			const priority = this.heapCost[0];
-			const state = this.pop();
+			this.pops++;
+			const state = heap.pop();
+			const g = heap.poppedG;
+			if (g > dist[state]) continue;
 			const cell = state >> 2;
-			const cost = this.dist[state];
-			if (priority > cost + estimate(cell) + 1e-9) continue;
 			const heading = state & 3;
-			if (target[cell] && this.prev[state] !== -1) return this.path(state);
-			const ix = cell % grid.nx;
-			const iy = (cell - ix) / grid.nx;
+			const atSource = prev[state] === -1;
+			if (target[cell] && !atSource) return this.path(state);
+			const ix = cell % nx;
+			const iy = (cell - ix) / nx;
 			for (let h = 0; h < 4; h++) {
 				const jx = ix + DX[h],
 					jy = iy + DY[h];
-				if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
-				const next = jy * grid.nx + jx;
-				const o = grid.owner[next];
-				if (!target[next] && o !== FREE && o !== net) continue;
-				const step =
-					1 +
-					(useCost ? grid.cost[next] : 0) +
-					(h === heading || this.prev[state] === -1 ? 0 : BEND_COST);
+				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
+				const next = jy * nx + jx;
+				const o = owner[next];
+				if (o !== FREE_CELL && o !== net && !target[next]) continue;
+				const nd = g + 1 + (cost ? cost[next] : 0) + (h === heading || atSource ? 0 : BEND_COST);
 				const ns = next * 4 + h;
-				const nd = cost + step;
-				if (!seen(ns) || nd < this.dist[ns]) {
-					this.stamp[ns] = this.epoch;
-					this.dist[ns] = nd;
-					this.prev[ns] = state;
-					this.push(nd + estimate(next), ns);
+				if (stamp[ns] !== epoch || nd < dist[ns]) {
+					stamp[ns] = epoch;
+					dist[ns] = nd;
+					prev[ns] = state;
+					heap.push(nd + this.estimate(jx, jy), nd, ns);
 				}
 			}
 		}
@@ -274,7 +235,7 @@ export class GridSearch {
 
 	private path(state: number): number[] {
 		const cells: number[] = [];
-		for (let s = state; s !== -1; s = this.prev[s]) cells.push(s >> 2);
+		for (let s = state; s !== -1; s = this.scratch.prev[s]) cells.push(s >> 2);
 		return cells.reverse();
 	}
 }
