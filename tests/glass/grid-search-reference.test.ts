@@ -146,3 +146,59 @@ describe('least-cost search against textbook Dijkstra on random plates', () => {
 			});
 		});
 });
+
+/**
+ * A plate shaped like a real one: a dear viewing area (extra 2 per cell) crossed by thin lines of
+ * another plate's conductors (extra 40), some cells taken by other nets; leads from outside into
+ * the area and between points inside it, where the distance estimate adds the extra cost no lead
+ * near its ends can avoid. Any overestimate there would show as a dearer path than the reference.
+ */
+function viewingAreaCase(seed: number): Case {
+	const random = lcg(seed);
+	const grid = new RouteGrid({
+		domain: { x_mm: 0, y_mm: 0, width_mm: 36, height_mm: 26 },
+		cell_mm: 1
+	});
+	const net = 1;
+	for (let iy = 0; iy < grid.ny; iy++)
+		for (let ix = 0; ix < grid.nx; ix++) {
+			const cell = iy * grid.nx + ix;
+			const inArea = ix >= 4 && ix <= 31 && iy >= 4 && iy <= 21;
+			const onLine = inArea && iy % 6 === 0 && ix % 9 !== 0;
+			grid.cost[cell] = inArea ? 2 + (onLine ? 40 : 0) : 0;
+			if (random() < 0.08) grid.owner[cell] = BLOCKED;
+		}
+	const inside = () => 5 + Math.floor(random() * 26) + (5 + Math.floor(random() * 16)) * grid.nx;
+	const anywhere = () => Math.floor(random() * grid.nx * grid.ny);
+	const sources = [random() < 0.5 ? anywhere() : inside()];
+	const target = new Uint8Array(grid.nx * grid.ny);
+	const t = inside();
+	for (const c of [t, t + 1, t + grid.nx]) target[c] = 1;
+	for (const c of [...sources, t, t + 1, t + grid.nx]) grid.owner[c] = FREE;
+	return { grid, net, sources, target };
+}
+
+describe('least-cost search against textbook Dijkstra across a dear viewing area', () => {
+	it('finds the optimum cost when the estimate counts the unavoidable extra cost', () => {
+		const cases: ReferenceCase[] = [];
+		for (let seed = 1; seed <= 24; seed++) {
+			const c = viewingAreaCase(seed * 104729);
+			const search = new GridSearch(c.grid);
+			const targetCells = [...c.target.keys()].filter((cell) => c.target[cell]);
+			const path = search.search({ ...c, boxes: boxesOf(c), targetCells });
+			const expected = referenceCost(c);
+			if (expected === Infinity) {
+				expect(path).toBeNull();
+				continue;
+			}
+			expect(path).not.toBeNull();
+			cases.push({ label: `plate ${seed}`, expected, actual: pathCost(c, path!) });
+		}
+		expect(cases.length).toBeGreaterThan(15);
+		expectWithin(cases, {
+			tolerance: 1e-9,
+			unit: 'cost units',
+			source: 'Dijkstra, Numer. Math. 1, 1959 (textbook least-cost search)'
+		});
+	});
+});

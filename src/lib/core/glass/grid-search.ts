@@ -1,7 +1,6 @@
 /**
  * Least-cost path on the routing grid: A* (Hart, Nilsson & Raphael, IEEE Trans. SSC-4, 1968) over
- * (cell, heading) states, guided by the Manhattan distance to the nearest target box (admissible:
- * every step costs at least 1), with 4-neighbour steps, so a bend costs extra and leads come out as few
+ * (cell, heading) states, with 4-neighbour steps, so a bend costs extra and leads come out as few
  * straight runs. Many sources, many targets; the search stops at the first target reached.
  *
  * Step cost = 1 + the cell's extra cost; a change of heading adds BEND_COST. A cell is passable
@@ -9,9 +8,17 @@
  * plain flood fill (cells only, no costs) asks whether any target can be reached at all, so a lead
  * that cannot exist costs one sweep of its region rather than a full least-cost search. A costed
  * search that runs past its budget of queue pops gives way to the plain shortest path (extra costs
- * ignored), which the distance estimate steers tightly: the lead exists, it may light more ghosts.
+ * ignored): the lead exists, it may light more ghosts.
+ *
+ * Distance estimates (admissible: every step costs at least 1): the costed search takes the
+ * Manhattan distance to the nearest target box plus the extra cost no lead can avoid near its ends
+ * (`CostFloor`); the plain search takes the breadth-first steps from the targets through the net's
+ * passable cells (Moore 1959), exact but for bends, and skips cells from which no target can be
+ * reached. The queue is a bucket queue while costs are whole numbers (`StateQueue`); the scratch
+ * arrays are shared between searches and grids (`SearchScratch`), stamped per search.
  */
 import { FREE, type RouteGrid } from './route-grid';
+import { CostFloor } from './cost-floor';
 import { scratchFor, type SearchScratch } from './search-scratch';
 
 const BEND_COST = 4;
@@ -23,14 +30,24 @@ const DX = Int32Array.of(1, -1, 0, 0);
 const DY = Int32Array.of(0, 0, 1, -1);
 /** Local copy: a module-level constant reads cheaper in the hot loops than an imported binding. */
 const FREE_CELL: number = FREE;
+const EMPTY = new Int32Array(0);
 
-/** Scratch arrays reused between searches on the same grid. */
+/** Least-cost searches on one routing grid. */
 export class GridSearch {
 	private readonly scratch: SearchScratch;
 	/** Queue pops over all of this object's searches (for profiling). */
 	pops = 0;
 	private boxes = new Int32Array(32);
 	private boxCount = 0;
+	/** Per box, the least steps from its cells to a cell below each cost level. */
+	private boxT = new Float64Array(16);
+	private w0 = 0;
+	private w1 = 0;
+	private r0: Int32Array = EMPTY;
+	private r1: Int32Array = EMPTY;
+	/** Bound on extra costs, built at the first costed search for the grid's cost version. */
+	private floor: CostFloor | null = null;
+	private floorVersion = -1;
 
 	constructor(private readonly grid: RouteGrid) {
 		this.scratch = scratchFor(grid.nx * grid.ny);
@@ -150,28 +167,111 @@ export class GridSearch {
 		targetCells?: readonly number[];
 	}): number[] | null {
 		if (!this.reachable(options)) return null;
-		return (
-			this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS }) ??
-			this.leastCost({ ...options, useCost: false, maxPops: Infinity })
-		);
+		const costed = this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS });
+		if (costed) return costed;
+		const field = options.targetCells
+			? this.stepField({ ...options, targetCells: options.targetCells })
+			: 0;
+		return this.leastCost({ ...options, useCost: false, maxPops: Infinity, field });
 	}
 
-	/** Distance estimate from cell (ix, iy) to the nearest of the current boxes, in cells. */
-	private estimate(ix: number, iy: number): number {
+	/**
+	 * Distance estimate from cell (ix, iy) to the nearest of the current boxes: the steps, plus in a
+	 * costed search the extra cost no lead can avoid near its ends (see CostFloor), per box.
+	 */
+	private estimate(cell: number, ix: number, iy: number): number {
 		const b = this.boxes;
+		const { w0, w1, r0, r1, boxT } = this;
+		const d0 = w0 > 0 && r0[cell] > 0 ? r0[cell] - 1 : 0;
+		const d1 = w1 > 0 && r1[cell] > 0 ? r1[cell] - 1 : 0;
 		let best = Infinity;
-		for (let k = 0; k < this.boxCount * 4; k += 4) {
-			const dx = b[k] - ix > 0 ? b[k] - ix : ix - b[k + 2] > 0 ? ix - b[k + 2] : 0;
-			const dy = b[k + 1] - iy > 0 ? b[k + 1] - iy : iy - b[k + 3] > 0 ? iy - b[k + 3] : 0;
-			if (dx + dy < best) best = dx + dy;
+		for (let k = 0; k < this.boxCount; k++) {
+			const q = 4 * k;
+			const dx = b[q] - ix > 0 ? b[q] - ix : ix - b[q + 2] > 0 ? ix - b[q + 2] : 0;
+			const dy = b[q + 1] - iy > 0 ? b[q + 1] - iy : iy - b[q + 3] > 0 ? iy - b[q + 3] : 0;
+			const m = (dx + dy) * HEURISTIC_WEIGHT;
+			let h = m;
+			if (w0 > 0) {
+				const a = d0 + boxT[2 * k];
+				h += w0 * (m < a ? m : a);
+			}
+			if (w1 > 0) {
+				const a = d1 + boxT[2 * k + 1];
+				h += w1 * (m < a ? m : a);
+			}
+			if (h < best) best = h;
 		}
-		return best === Infinity ? 0 : best * HEURISTIC_WEIGHT;
+		return best === Infinity ? 0 : best;
 	}
 
-	private setBoxes(boxes: readonly (readonly [number, number, number, number])[]): void {
-		if (this.boxes.length < boxes.length * 4) this.boxes = new Int32Array(boxes.length * 8);
-		boxes.forEach((box, k) => this.boxes.set(box, k * 4));
+	/** The estimate at a cell: its steps from the targets when a step field is given, else by the boxes. */
+	private estimateAt(options: { cell: number; ix: number; iy: number; field: number }): number {
+		const { cell, ix, iy, field } = options;
+		return field ? this.scratch.steps[cell] : this.estimate(cell, ix, iy);
+	}
+
+	/** Takes the boxes and, for a costed search, each box's least steps to cheaper cells. */
+	private setBoxes(
+		boxes: readonly (readonly [number, number, number, number])[],
+		floor: CostFloor | null
+	): void {
+		if (this.boxes.length < boxes.length * 4) {
+			this.boxes = new Int32Array(boxes.length * 8);
+			this.boxT = new Float64Array(boxes.length * 4);
+		}
+		boxes.forEach((box, k) => {
+			this.boxes.set(box, k * 4);
+			this.boxT[2 * k] = floor ? floor.leastReachIn(0, box) : 0;
+			this.boxT[2 * k + 1] = floor ? floor.leastReachIn(1, box) : 0;
+		});
 		this.boxCount = boxes.length;
+		this.w0 = floor ? floor.weight[0] : 0;
+		this.w1 = floor ? floor.weight[1] : 0;
+		this.r0 = floor ? floor.reach[0] : EMPTY;
+		this.r1 = floor ? floor.reach[1] : EMPTY;
+	}
+
+	/**
+	 * Breadth-first steps from the targets through cells passable for `net` (Moore, 1959): a lower
+	 * bound on every lead's remaining cost (each step costs at least 1), exact but for bends and
+	 * extra costs. Cells it never reaches cannot reach a target. Returns the field's mark.
+	 */
+	private stepField(options: {
+		target: Uint8Array;
+		targetCells: readonly number[];
+		net: number;
+	}): number {
+		const { nx, ny, owner } = this.grid;
+		const { target, targetCells, net } = options;
+		const { steps, stepsMark, queueB: queue } = this.scratch;
+		const mark = this.scratch.nextFieldMark();
+		let head = 0,
+			tail = 0;
+		for (const c of targetCells) {
+			if (stepsMark[c] === mark) continue;
+			stepsMark[c] = mark;
+			steps[c] = 0;
+			queue[tail++] = c;
+		}
+		while (head < tail) {
+			const cell = queue[head++];
+			const ix = cell % nx;
+			const iy = (cell - ix) / nx;
+			const d = steps[cell] + 1;
+			for (let h = 0; h < 4; h++) {
+				const jx = ix + DX[h],
+					jy = iy + DY[h];
+				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
+				const next = jy * nx + jx;
+				if (stepsMark[next] === mark) continue;
+				stepsMark[next] = mark;
+				steps[next] = d;
+				// A cell the net may not cross can still start a lead: it gets its steps, no more.
+				const o = owner[next];
+				if (o === FREE_CELL || o === net || target[next]) queue[tail++] = next;
+			}
+		}
+		return mark;
 	}
 
 	private leastCost(options: {
@@ -179,19 +279,29 @@ export class GridSearch {
 		target: Uint8Array;
 		net: number;
 		boxes: readonly (readonly [number, number, number, number])[];
+		targetCells?: readonly number[];
 		useCost: boolean;
 		maxPops: number;
+		/** Mark of a step field from the targets to steer by, instead of the boxes. */
+		field?: number;
 	}): number[] | null {
 		const { nx, ny, owner } = this.grid;
+		const field = options.field ?? 0;
+		const { stepsMark } = this.scratch;
 		const cost = options.useCost ? this.grid.cost : null;
 		const { sources, target, net } = options;
 		const { dist, prev, stamp, queue: heap } = this.scratch;
-		this.setBoxes(options.boxes);
+		if (cost && (!this.floor || this.floorVersion !== this.grid.costVersion)) {
+			this.floor = new CostFloor(this.grid);
+			this.floorVersion = this.grid.costVersion;
+		}
+		this.setBoxes(options.boxes, cost && !field ? this.floor : null);
 		const epoch = this.scratch.nextEpoch();
 		heap.clear();
 		for (const cell of sources) {
 			const ix = cell % nx;
-			const f = this.estimate(ix, (cell - ix) / nx);
+			if (field && stepsMark[cell] !== field) continue;
+			const f = this.estimateAt({ cell, ix, iy: (cell - ix) / nx, field });
 			for (let h = 0; h < 4; h++) {
 				const s = cell * 4 + h;
 				stamp[s] = epoch;
@@ -220,13 +330,14 @@ export class GridSearch {
 				const next = jy * nx + jx;
 				const o = owner[next];
 				if (o !== FREE_CELL && o !== net && !target[next]) continue;
+				if (field && stepsMark[next] !== field) continue;
 				const nd = g + 1 + (cost ? cost[next] : 0) + (h === heading || atSource ? 0 : BEND_COST);
 				const ns = next * 4 + h;
 				if (stamp[ns] !== epoch || nd < dist[ns]) {
 					stamp[ns] = epoch;
 					dist[ns] = nd;
 					prev[ns] = state;
-					heap.push(nd + this.estimate(jx, jy), nd, ns);
+					heap.push(nd + this.estimateAt({ cell: next, ix: jx, iy: jy, field }), nd, ns);
 				}
 			}
 		}

@@ -39,7 +39,12 @@ export class RouteGrid {
 	readonly nx: number;
 	readonly ny: number;
 	readonly owner: Int32Array;
+	/**
+	 * Extra cost of entering each cell. Searches read it once per `costVersion` (which `addCost`
+	 * advances): write it directly only before the first search.
+	 */
 	readonly cost: Float32Array;
+	costVersion = 0;
 
 	constructor(options: { domain: Rect; cell_mm: number }) {
 		const { domain, cell_mm } = options;
@@ -113,6 +118,7 @@ export class RouteGrid {
 
 	/** Adds `extra` to the cost of every cell whose centre lies inside the ring (or within reach). */
 	addCost(ring: Float64Array, extra: number, reach_mm = 0): void {
+		this.costVersion++;
 		this.forCellsNear(ring, reach_mm, (cell) => {
 			this.cost[cell] += extra;
 		});

@@ -21,8 +21,12 @@ export class SearchScratch {
 	readonly floodB: Uint32Array;
 	readonly queueA: Int32Array;
 	readonly queueB: Int32Array;
+	/** Steps from the nearest target (cells), valid where `stepsMark` holds the current field mark. */
+	readonly steps: Int32Array;
+	readonly stepsMark: Uint32Array;
 	readonly queue = new StateQueue();
 	private epoch = 0;
+	private fieldEpoch = 0;
 	private floodEpoch = 0;
 	/** The search object whose fill wrote the current flood marks. */
 	floodOwner: object | null = null;
@@ -36,6 +40,17 @@ export class SearchScratch {
 		this.floodB = new Uint32Array(cells);
 		this.queueA = new Int32Array(cells);
 		this.queueB = new Int32Array(cells);
+		this.steps = new Int32Array(cells);
+		this.stepsMark = new Uint32Array(cells);
+	}
+
+	/** A mark no cell of the step field carries yet. */
+	nextFieldMark(): number {
+		if (this.fieldEpoch === 0xffffffff) {
+			this.stepsMark.fill(0);
+			this.fieldEpoch = 0;
+		}
+		return ++this.fieldEpoch;
 	}
 
 	/** A stamp no state carries yet. */
