@@ -69,19 +69,27 @@ function distanceBelow(grid: RouteGrid, level: number): Int32Array {
 			dist[c] = 0;
 			queue[tail++] = c;
 		}
-	const visit = (next: number, d: number) => {
-		if (dist[next] <= d) return;
-		dist[next] = d;
-		queue[tail++] = next;
-	};
 	while (head < tail) {
 		const c = queue[head++];
 		const ix = c % nx;
 		const d = dist[c] + 1;
-		if (ix > 0) visit(c - 1, d);
-		if (ix < nx - 1) visit(c + 1, d);
-		if (c >= nx) visit(c - nx, d);
-		if (c + nx < n) visit(c + nx, d);
+		// Left, right, below, above: each cell enters the queue once, at its least distance.
+		if (ix > 0 && dist[c - 1] > d) {
+			dist[c - 1] = d;
+			queue[tail++] = c - 1;
+		}
+		if (ix < nx - 1 && dist[c + 1] > d) {
+			dist[c + 1] = d;
+			queue[tail++] = c + 1;
+		}
+		if (c >= nx && dist[c - nx] > d) {
+			dist[c - nx] = d;
+			queue[tail++] = c - nx;
+		}
+		if (c + nx < n && dist[c + nx] > d) {
+			dist[c + nx] = d;
+			queue[tail++] = c + nx;
+		}
 	}
 	return dist;
 }

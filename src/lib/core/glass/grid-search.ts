@@ -78,6 +78,8 @@ export class GridSearch {
 	}): boolean {
 		const { floodA: a, floodB: b, queueA: qa, queueB: qb } = this.scratch;
 		const { nx, ny, owner } = this.grid;
+		const n = nx * ny;
+		const step = [1, -1, nx, -nx];
 		const { sources, target, net } = options;
 		const mark = this.scratch.nextFloodMark();
 		this.scratch.floodOwner = this;
@@ -105,12 +107,9 @@ export class GridSearch {
 			// One cell of the sources' side: a target or the other side's mark ends the fill.
 			let cell = qa[ha++];
 			let ix = cell % nx;
-			let iy = (cell - ix) / nx;
 			for (let h = 0; h < 4; h++) {
-				const jx = ix + DX[h],
-					jy = iy + DY[h];
-				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
-				const next = jy * nx + jx;
+				const next = cell + step[h];
+				if (h < 2 ? ix === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
 				if (a[next] === mark) continue;
 				if (target[next] || (twoSided && b[next] === mark)) return true;
 				const o = owner[next];
@@ -123,12 +122,9 @@ export class GridSearch {
 				// The target's region is complete: the sources reach it only through a neighbour in it.
 				for (const c of sources) {
 					const cx = c % nx;
-					const cy = (c - cx) / nx;
 					for (let h = 0; h < 4; h++) {
-						const jx = cx + DX[h],
-							jy = cy + DY[h];
-						if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
-						const next = jy * nx + jx;
+						const next = c + step[h];
+						if (h < 2 ? cx === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
 						if (a[next] !== mark && (target[next] || b[next] === mark)) return true;
 					}
 				}
@@ -137,12 +133,9 @@ export class GridSearch {
 			// One cell of the targets' side.
 			cell = qb[hb++];
 			ix = cell % nx;
-			iy = (cell - ix) / nx;
 			for (let h = 0; h < 4; h++) {
-				const jx = ix + DX[h],
-					jy = iy + DY[h];
-				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
-				const next = jy * nx + jx;
+				const next = cell + step[h];
+				if (h < 2 ? ix === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
 				if (b[next] === mark) continue;
 				if (a[next] === mark) return true;
 				const o = owner[next];
@@ -253,16 +246,15 @@ export class GridSearch {
 			steps[c] = 0;
 			queue[tail++] = c;
 		}
+		const n = nx * ny;
+		const step = [1, -1, nx, -nx];
 		while (head < tail) {
 			const cell = queue[head++];
 			const ix = cell % nx;
-			const iy = (cell - ix) / nx;
 			const d = steps[cell] + 1;
 			for (let h = 0; h < 4; h++) {
-				const jx = ix + DX[h],
-					jy = iy + DY[h];
-				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
-				const next = jy * nx + jx;
+				const next = cell + step[h];
+				if (h < 2 ? ix === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
 				if (stepsMark[next] === mark) continue;
 				stepsMark[next] = mark;
 				steps[next] = d;

@@ -93,7 +93,17 @@ export class RouteGrid {
 				if (yi > y !== yj > y)
 					crossings[m++] = ((ring[j] - ring[i]) * (y - yi)) / (yj - yi) + ring[i];
 			}
-			const row = crossings.subarray(0, m).sort();
+			// Insertion sort: a row crosses a ring at a handful of points.
+			for (let i = 1; i < m; i++) {
+				const x = crossings[i];
+				let j = i - 1;
+				while (j >= 0 && crossings[j] > x) {
+					crossings[j + 1] = crossings[j];
+					j--;
+				}
+				crossings[j + 1] = x;
+			}
+			const row = crossings;
 			// `k` counts the crossings at or left of the centre: inside while an odd number lie right of it.
 			let k = 0;
 			for (let ix = ix0; ix <= ix1; ix++) {
