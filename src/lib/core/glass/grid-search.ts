@@ -197,12 +197,6 @@ export class GridSearch {
 		return best === Infinity ? 0 : best;
 	}
 
-	/** The estimate at a cell: its steps from the targets when a step field is given, else by the boxes. */
-	private estimateAt(options: { cell: number; ix: number; iy: number; field: number }): number {
-		const { cell, ix, iy, field } = options;
-		return field ? this.scratch.steps[cell] : this.estimate(cell, ix, iy);
-	}
-
 	/** Takes the boxes and, for a costed search, each box's least steps to cheaper cells. */
 	private setBoxes(
 		boxes: readonly (readonly [number, number, number, number])[],
@@ -279,7 +273,7 @@ export class GridSearch {
 	}): number[] | null {
 		const { nx, ny, owner } = this.grid;
 		const field = options.field ?? 0;
-		const { stepsMark } = this.scratch;
+		const { steps, stepsMark } = this.scratch;
 		const cost = options.useCost ? this.grid.cost : null;
 		const { sources, target, net } = options;
 		const { dist, prev, stamp, queue: heap } = this.scratch;
@@ -293,7 +287,7 @@ export class GridSearch {
 		for (const cell of sources) {
 			const ix = cell % nx;
 			if (field && stepsMark[cell] !== field) continue;
-			const f = this.estimateAt({ cell, ix, iy: (cell - ix) / nx, field });
+			const f = field ? steps[cell] : this.estimate(cell, ix, (cell - ix) / nx);
 			for (let h = 0; h < 4; h++) {
 				const s = cell * 4 + h;
 				stamp[s] = epoch;
@@ -329,7 +323,8 @@ export class GridSearch {
 					stamp[ns] = epoch;
 					dist[ns] = nd;
 					prev[ns] = state;
-					heap.push(nd + this.estimateAt({ cell: next, ix: jx, iy: jy, field }), nd, ns);
+					// The estimate: steps from the targets with a step field, else by the boxes.
+					heap.push(nd + (field ? steps[next] : this.estimate(next, jx, jy)), nd, ns);
 				}
 			}
 		}
