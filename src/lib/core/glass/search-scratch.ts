@@ -9,8 +9,11 @@
  */
 import { StateQueue } from './state-queue';
 
-/** Largest grid (cells) whose scratch stays allocated after its searches: about 70 MB. */
-const KEEP_CELLS = 1_000_000;
+/**
+ * Largest grid (cells) whose scratch stays allocated after its searches: 88 bytes a cell, so
+ * about 44 MB at most (a 100 × 100 mm glass at a 0.15 mm trace pitch is 0.44 M cells).
+ */
+const KEEP_CELLS = 500_000;
 
 export class SearchScratch {
 	readonly cells: number;
