@@ -20,6 +20,7 @@
 import { FREE, type RouteGrid } from './route-grid';
 import { CostFloor } from './cost-floor';
 import { scratchFor, type SearchScratch } from './search-scratch';
+import { stepField } from './step-field';
 
 const BEND_COST = 4;
 /** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
@@ -163,7 +164,12 @@ export class GridSearch {
 		const costed = this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS });
 		if (costed) return costed;
 		const field = options.targetCells
-			? this.stepField({ ...options, targetCells: options.targetCells })
+			? stepField({
+					grid: this.grid,
+					scratch: this.scratch,
+					...options,
+					targetCells: options.targetCells
+				})
 			: 0;
 		return this.leastCost({ ...options, useCost: false, maxPops: Infinity, field });
 	}
@@ -216,48 +222,6 @@ export class GridSearch {
 		this.w1 = floor ? floor.weight[1] : 0;
 		this.r0 = floor ? floor.reach[0] : EMPTY;
 		this.r1 = floor ? floor.reach[1] : EMPTY;
-	}
-
-	/**
-	 * Breadth-first steps from the targets through cells passable for `net` (Moore, 1959): a lower
-	 * bound on every lead's remaining cost (each step costs at least 1), exact but for bends and
-	 * extra costs. Cells it never reaches cannot reach a target. Returns the field's mark.
-	 */
-	private stepField(options: {
-		target: Uint8Array;
-		targetCells: readonly number[];
-		net: number;
-	}): number {
-		const { nx, ny, owner } = this.grid;
-		const { target, targetCells, net } = options;
-		const { steps, stepsMark, queueB: queue } = this.scratch;
-		const mark = this.scratch.nextFieldMark();
-		let head = 0,
-			tail = 0;
-		for (const c of targetCells) {
-			if (stepsMark[c] === mark) continue;
-			stepsMark[c] = mark;
-			steps[c] = 0;
-			queue[tail++] = c;
-		}
-		const n = nx * ny;
-		const step = [1, -1, nx, -nx];
-		while (head < tail) {
-			const cell = queue[head++];
-			const ix = cell % nx;
-			const d = steps[cell] + 1;
-			for (let h = 0; h < 4; h++) {
-				const next = cell + step[h];
-				if (h < 2 ? ix === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
-				if (stepsMark[next] === mark) continue;
-				stepsMark[next] = mark;
-				steps[next] = d;
-				// A cell the net may not cross can still start a lead: it gets its steps, no more.
-				const o = owner[next];
-				if (o === FREE_CELL || o === net || target[next]) queue[tail++] = next;
-			}
-		}
-		return mark;
 	}
 
 	private leastCost(options: {
