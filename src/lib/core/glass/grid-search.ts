@@ -1,7 +1,6 @@
 /**
  * Least-cost path on the routing grid: A* (Hart, Nilsson & Raphael, IEEE Trans. SSC-4, 1968) over
- * (cell, heading) states, guided by the Manhattan distance to the nearest target box (admissible:
- * every step costs at least 1), with 4-neighbour steps, so a bend costs extra and leads come out as few
+ * (cell, heading) states, with 4-neighbour steps, so a bend costs extra and leads come out as few
  * straight runs. Many sources, many targets; the search stops at the first target reached.
  *
  * Step cost = 1 + the cell's extra cost; a change of heading adds BEND_COST. A cell is passable
@@ -9,81 +8,63 @@
  * plain flood fill (cells only, no costs) asks whether any target can be reached at all, so a lead
  * that cannot exist costs one sweep of its region rather than a full least-cost search. A costed
  * search that runs past its budget of queue pops gives way to the plain shortest path (extra costs
- * ignored), which the distance estimate steers tightly: the lead exists, it may light more ghosts.
+ * ignored): the lead exists, it may light more ghosts.
+ *
+ * Distance estimates (admissible: every step costs at least 1): the costed search takes the
+ * Manhattan distance to the nearest target box plus the extra cost no lead can avoid near its ends
+ * (`CostFloor`); the plain search takes the breadth-first steps from the targets through the net's
+ * passable cells (Moore 1959), exact but for bends, and skips cells from which no target can be
+ * reached. The queue is a bucket queue while costs are whole numbers (`StateQueue`); the scratch
+ * arrays are shared between searches and grids (`SearchScratch`), stamped per search.
  */
 import { FREE, type RouteGrid } from './route-grid';
+import { CostFloor } from './cost-floor';
+import { scratchFor, type SearchScratch } from './search-scratch';
+import { stepField } from './step-field';
 
 const BEND_COST = 4;
 /** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
 const HEURISTIC_WEIGHT = 1;
 /** Queue pops the costed search may take before the plain shortest path is taken instead. */
 const COSTED_POPS = 60_000;
-const DX = [1, -1, 0, 0];
-const DY = [0, 0, 1, -1];
+const DX = Int32Array.of(1, -1, 0, 0);
+const DY = Int32Array.of(0, 0, 1, -1);
+/** Local copy: a module-level constant reads cheaper in the hot loops than an imported binding. */
+const FREE_CELL: number = FREE;
+const EMPTY = new Int32Array(0);
 
-/** Scratch arrays reused between searches on the same grid. */
+/** Least-cost searches on one routing grid. */
 export class GridSearch {
-	private readonly dist: Float64Array;
-	private readonly prev: Int32Array;
-	private readonly stamp: Uint32Array;
-	private epoch = 0;
-	private readonly floodStamp: Uint32Array;
-	private readonly floodQueue: Int32Array;
-	private readonly floodStampB: Uint32Array;
-	private readonly floodQueueB: Int32Array;
-	private floodEpoch = 0;
-	private heapCost: Float64Array = new Float64Array(1024);
-	private heapState: Int32Array = new Int32Array(1024);
-	private heapSize = 0;
+	private readonly scratch: SearchScratch;
+	/** Queue pops over all of this object's searches (for profiling). */
+	pops = 0;
+	private boxes = new Int32Array(32);
+	private boxCount = 0;
+	/** Per box, the least steps from its cells to a cell below each cost level. */
+	private boxT = new Float64Array(16);
+	private w0 = 0;
+	private w1 = 0;
+	private r0: Int32Array = EMPTY;
+	private r1: Int32Array = EMPTY;
+	/** Bound on extra costs, built at the first costed search for the grid's cost version. */
+	private floor: CostFloor | null = null;
+	private floorVersion = -1;
 
 	constructor(private readonly grid: RouteGrid) {
-		const states = grid.nx * grid.ny * 4;
-		this.dist = new Float64Array(states);
-		this.prev = new Int32Array(states);
-		this.stamp = new Uint32Array(states);
-		this.floodStamp = new Uint32Array(grid.nx * grid.ny);
-		this.floodQueue = new Int32Array(grid.nx * grid.ny);
-		this.floodStampB = new Uint32Array(grid.nx * grid.ny);
-		this.floodQueueB = new Int32Array(grid.nx * grid.ny);
+		this.scratch = scratchFor(grid.nx * grid.ny);
 	}
 
 	/** Whether the last fill that found no way ran dry on the sources' side and swept `cell`. */
 	floodedInVain(cell: number): boolean {
-		return this.sourceSideDry && this.floodStamp[cell] === this.floodEpoch;
+		const { scratch } = this;
+		return (
+			this.sourceSideDry &&
+			scratch.floodOwner === this &&
+			scratch.floodA[cell] === scratch.floodMark
+		);
 	}
 
 	private sourceSideDry = false;
-
-	/** Adds the passable, unseen neighbours of `cell` to one side's queue; true when the sides meet. */
-	private spread(options: {
-		cell: number;
-		net: number;
-		mine: Uint32Array;
-		theirs: Uint32Array | null;
-		target: Uint8Array | null;
-		queue: Int32Array;
-		tail: number;
-	}): number {
-		const { grid } = this;
-		const { cell, net, mine, theirs, target, queue } = options;
-		const mark = this.floodEpoch;
-		let tail = options.tail;
-		const ix = cell % grid.nx;
-		const iy = (cell - ix) / grid.nx;
-		for (let h = 0; h < 4; h++) {
-			const jx = ix + DX[h],
-				jy = iy + DY[h];
-			if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
-			const next = jy * grid.nx + jx;
-			if (mine[next] === mark) continue;
-			if ((target && target[next]) || (theirs && theirs[next] === mark)) return -1;
-			const o = grid.owner[next];
-			if (o !== FREE && o !== net) continue;
-			mine[next] = mark;
-			queue[tail++] = next;
-		}
-		return tail;
-	}
 
 	/**
 	 * Whether some target cell can be reached from the sources through cells passable for `net`.
@@ -96,9 +77,13 @@ export class GridSearch {
 		net: number;
 		targetCells?: readonly number[];
 	}): boolean {
-		const { floodStamp: a, floodStampB: b, floodQueue: qa, floodQueueB: qb } = this;
+		const { floodA: a, floodB: b, queueA: qa, queueB: qb } = this.scratch;
+		const { nx, ny, owner } = this.grid;
+		const n = nx * ny;
+		const step = [1, -1, nx, -nx];
 		const { sources, target, net } = options;
-		const mark = ++this.floodEpoch;
+		const mark = this.scratch.nextFloodMark();
+		this.scratch.floodOwner = this;
 		this.sourceSideDry = false;
 		let ha = 0,
 			ta = 0,
@@ -115,73 +100,51 @@ export class GridSearch {
 			b[c] = mark;
 			qb[tb++] = c;
 		}
-		const theirs = twoSided ? b : null;
 		for (;;) {
 			if (ha === ta) {
 				this.sourceSideDry = true;
 				return false;
 			}
-			ta = this.spread({ cell: qa[ha++], net, mine: a, theirs, target, queue: qa, tail: ta });
-			if (ta < 0) return true;
+			// One cell of the sources' side: a target or the other side's mark ends the fill.
+			let cell = qa[ha++];
+			let ix = cell % nx;
+			for (let h = 0; h < 4; h++) {
+				const next = cell + step[h];
+				if (h < 2 ? ix === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
+				if (a[next] === mark) continue;
+				if (target[next] || (twoSided && b[next] === mark)) return true;
+				const o = owner[next];
+				if (o !== FREE_CELL && o !== net) continue;
+				a[next] = mark;
+				qa[ta++] = next;
+			}
 			if (!twoSided) continue;
 			if (hb === tb) {
 				// The target's region is complete: the sources reach it only through a neighbour in it.
-				for (const c of sources)
-					if (this.spread({ cell: c, net, mine: a, theirs: b, target, queue: qa, tail: 0 }) < 0)
-						return true;
+				for (const c of sources) {
+					const cx = c % nx;
+					for (let h = 0; h < 4; h++) {
+						const next = c + step[h];
+						if (h < 2 ? cx === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
+						if (a[next] !== mark && (target[next] || b[next] === mark)) return true;
+					}
+				}
 				return false;
 			}
-			tb = this.spread({
-				cell: qb[hb++],
-				net,
-				mine: b,
-				theirs: a,
-				target: null,
-				queue: qb,
-				tail: tb
-			});
-			if (tb < 0) return true;
+			// One cell of the targets' side.
+			cell = qb[hb++];
+			ix = cell % nx;
+			for (let h = 0; h < 4; h++) {
+				const next = cell + step[h];
+				if (h < 2 ? ix === (h === 0 ? nx - 1 : 0) : next < 0 || next >= n) continue;
+				if (b[next] === mark) continue;
+				if (a[next] === mark) return true;
+				const o = owner[next];
+				if (o !== FREE_CELL && o !== net) continue;
+				b[next] = mark;
+				qb[tb++] = next;
+			}
 		}
-	}
-
-	private push(cost: number, state: number): void {
-		if (this.heapSize === this.heapCost.length) {
-			const c = new Float64Array(this.heapSize * 2);
-			c.set(this.heapCost);
-			const s = new Int32Array(this.heapSize * 2);
-			s.set(this.heapState);
-			this.heapCost = c;
-			this.heapState = s;
-		}
-		let i = this.heapSize++;
-		while (i > 0) {
-			const parent = (i - 1) >> 1;
-			if (this.heapCost[parent] <= cost) break;
-			this.heapCost[i] = this.heapCost[parent];
-			this.heapState[i] = this.heapState[parent];
-			i = parent;
-		}
-		this.heapCost[i] = cost;
-		this.heapState[i] = state;
-	}
-
-	private pop(): number {
-		const top = this.heapState[0];
-		const lastCost = this.heapCost[--this.heapSize];
-		const lastState = this.heapState[this.heapSize];
-		let i = 0;
-		for (;;) {
-			let child = 2 * i + 1;
-			if (child >= this.heapSize) break;
-			if (child + 1 < this.heapSize && this.heapCost[child + 1] < this.heapCost[child]) child++;
-			if (this.heapCost[child] >= lastCost) break;
-			this.heapCost[i] = this.heapCost[child];
-			this.heapState[i] = this.heapState[child];
-			i = child;
-		}
-		this.heapCost[i] = lastCost;
-		this.heapState[i] = lastState;
-		return top;
 	}
 
 	/**
@@ -198,10 +161,67 @@ export class GridSearch {
 		targetCells?: readonly number[];
 	}): number[] | null {
 		if (!this.reachable(options)) return null;
-		return (
-			this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS }) ??
-			this.leastCost({ ...options, useCost: false, maxPops: Infinity })
-		);
+		const costed = this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS });
+		if (costed) return costed;
+		const field = options.targetCells
+			? stepField({
+					grid: this.grid,
+					scratch: this.scratch,
+					...options,
+					targetCells: options.targetCells
+				})
+			: 0;
+		return this.leastCost({ ...options, useCost: false, maxPops: Infinity, field });
+	}
+
+	/**
+	 * Distance estimate from cell (ix, iy) to the nearest of the current boxes: the steps, plus in a
+	 * costed search the extra cost no lead can avoid near its ends (see CostFloor), per box.
+	 */
+	private estimate(cell: number, ix: number, iy: number): number {
+		const b = this.boxes;
+		const { w0, w1, r0, r1, boxT } = this;
+		const d0 = w0 > 0 && r0[cell] > 0 ? r0[cell] - 1 : 0;
+		const d1 = w1 > 0 && r1[cell] > 0 ? r1[cell] - 1 : 0;
+		let best = Infinity;
+		for (let k = 0; k < this.boxCount; k++) {
+			const q = 4 * k;
+			const dx = b[q] - ix > 0 ? b[q] - ix : ix - b[q + 2] > 0 ? ix - b[q + 2] : 0;
+			const dy = b[q + 1] - iy > 0 ? b[q + 1] - iy : iy - b[q + 3] > 0 ? iy - b[q + 3] : 0;
+			const m = (dx + dy) * HEURISTIC_WEIGHT;
+			let h = m;
+			if (w0 > 0) {
+				const a = d0 + boxT[2 * k];
+				h += w0 * (m < a ? m : a);
+			}
+			if (w1 > 0) {
+				const a = d1 + boxT[2 * k + 1];
+				h += w1 * (m < a ? m : a);
+			}
+			if (h < best) best = h;
+		}
+		return best === Infinity ? 0 : best;
+	}
+
+	/** Takes the boxes and, for a costed search, each box's least steps to cheaper cells. */
+	private setBoxes(
+		boxes: readonly (readonly [number, number, number, number])[],
+		floor: CostFloor | null
+	): void {
+		if (this.boxes.length < boxes.length * 4) {
+			this.boxes = new Int32Array(boxes.length * 8);
+			this.boxT = new Float64Array(boxes.length * 4);
+		}
+		boxes.forEach((box, k) => {
+			this.boxes.set(box, k * 4);
+			this.boxT[2 * k] = floor ? floor.leastReachIn(0, box) : 0;
+			this.boxT[2 * k + 1] = floor ? floor.leastReachIn(1, box) : 0;
+		});
+		this.boxCount = boxes.length;
+		this.w0 = floor ? floor.weight[0] : 0;
+		this.w1 = floor ? floor.weight[1] : 0;
+		this.r0 = floor ? floor.reach[0] : EMPTY;
+		this.r1 = floor ? floor.reach[1] : EMPTY;
 	}
 
 	private leastCost(options: {
@@ -209,63 +229,66 @@ export class GridSearch {
 		target: Uint8Array;
 		net: number;
 		boxes: readonly (readonly [number, number, number, number])[];
+		targetCells?: readonly number[];
 		useCost: boolean;
 		maxPops: number;
+		/** Mark of a step field from the targets to steer by, instead of the boxes. */
+		field?: number;
 	}): number[] | null {
-		const { grid } = this;
-		const { sources, target, net, boxes, useCost } = options;
-		let budget = options.maxPops;
-		const estimate = (cell: number) => {
-			const ix = cell % grid.nx;
-			const iy = (cell - ix) / grid.nx;
-			let best = Infinity;
-			for (const b of boxes) {
-				const d = Math.max(0, b[0] - ix, ix - b[2]) + Math.max(0, b[1] - iy, iy - b[3]);
-				if (d < best) best = d;
-			}
-			return best === Infinity ? 0 : best * HEURISTIC_WEIGHT;
-		};
-		this.epoch++;
-		this.heapSize = 0;
-		const seen = (s: number) => this.stamp[s] === this.epoch;
+		const { nx, ny, owner } = this.grid;
+		const field = options.field ?? 0;
+		const { steps, stepsMark } = this.scratch;
+		const cost = options.useCost ? this.grid.cost : null;
+		const { sources, target, net } = options;
+		const { dist, prev, stamp, queue: heap } = this.scratch;
+		if (cost && (!this.floor || this.floorVersion !== this.grid.costVersion)) {
+			this.floor = new CostFloor(this.grid);
+			this.floorVersion = this.grid.costVersion;
+		}
+		this.setBoxes(options.boxes, cost && !field ? this.floor : null);
+		const epoch = this.scratch.nextEpoch();
+		heap.clear();
 		for (const cell of sources) {
+			const ix = cell % nx;
+			if (field && stepsMark[cell] !== field) continue;
+			const f = field ? steps[cell] : this.estimate(cell, ix, (cell - ix) / nx);
 			for (let h = 0; h < 4; h++) {
 				const s = cell * 4 + h;
-				this.stamp[s] = this.epoch;
-				this.dist[s] = 0;
-				this.prev[s] = -1;
-				this.push(estimate(cell), s);
+				stamp[s] = epoch;
+				dist[s] = 0;
+				prev[s] = -1;
+				heap.push(f, 0, s);
 			}
 		}
-		while (this.heapSize > 0) {
+		let budget = options.maxPops;
+		while (heap.size > 0) {
 			if (budget-- <= 0) return null;
-			const priority = this.heapCost[0];
-			const state = this.pop();
+			this.pops++;
+			const state = heap.pop();
+			const g = heap.poppedG;
+			if (g > dist[state]) continue;
 			const cell = state >> 2;
-			const cost = this.dist[state];
-			if (priority > cost + estimate(cell) + 1e-9) continue;
 			const heading = state & 3;
-			if (target[cell] && this.prev[state] !== -1) return this.path(state);
-			const ix = cell % grid.nx;
-			const iy = (cell - ix) / grid.nx;
+			const atSource = prev[state] === -1;
+			if (target[cell] && !atSource) return this.path(state);
+			const ix = cell % nx;
+			const iy = (cell - ix) / nx;
 			for (let h = 0; h < 4; h++) {
 				const jx = ix + DX[h],
 					jy = iy + DY[h];
-				if (jx < 0 || jy < 0 || jx >= grid.nx || jy >= grid.ny) continue;
-				const next = jy * grid.nx + jx;
-				const o = grid.owner[next];
-				if (!target[next] && o !== FREE && o !== net) continue;
-				const step =
-					1 +
-					(useCost ? grid.cost[next] : 0) +
-					(h === heading || this.prev[state] === -1 ? 0 : BEND_COST);
+				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
+				const next = jy * nx + jx;
+				const o = owner[next];
+				if (o !== FREE_CELL && o !== net && !target[next]) continue;
+				if (field && stepsMark[next] !== field) continue;
+				const nd = g + 1 + (cost ? cost[next] : 0) + (h === heading || atSource ? 0 : BEND_COST);
 				const ns = next * 4 + h;
-				const nd = cost + step;
-				if (!seen(ns) || nd < this.dist[ns]) {
-					this.stamp[ns] = this.epoch;
-					this.dist[ns] = nd;
-					this.prev[ns] = state;
-					this.push(nd + estimate(next), ns);
+				if (stamp[ns] !== epoch || nd < dist[ns]) {
+					stamp[ns] = epoch;
+					dist[ns] = nd;
+					prev[ns] = state;
+					// The estimate: steps from the targets with a step field, else by the boxes.
+					heap.push(nd + (field ? steps[next] : this.estimate(next, jx, jy)), nd, ns);
 				}
 			}
 		}
@@ -274,7 +297,7 @@ export class GridSearch {
 
 	private path(state: number): number[] {
 		const cells: number[] = [];
-		for (let s = state; s !== -1; s = this.prev[s]) cells.push(s >> 2);
+		for (let s = state; s !== -1; s = this.scratch.prev[s]) cells.push(s >> 2);
 		return cells.reverse();
 	}
 }

@@ -10,7 +10,6 @@
  * the glass check measures afterwards on the real geometry).
  */
 import type { Rect } from '../design/schema';
-import { pointInRing } from '../geometry/polygon';
 import { ringBounds } from './rings';
 
 export const FREE = -1;
@@ -40,7 +39,12 @@ export class RouteGrid {
 	readonly nx: number;
 	readonly ny: number;
 	readonly owner: Int32Array;
+	/**
+	 * Extra cost of entering each cell. Searches read it once per `costVersion` (which `addCost`
+	 * advances): write it directly only before the first search.
+	 */
 	readonly cost: Float32Array;
+	costVersion = 0;
 
 	constructor(options: { domain: Rect; cell_mm: number }) {
 		const { domain, cell_mm } = options;
@@ -60,7 +64,12 @@ export class RouteGrid {
 	centreX = (ix: number): number => this.x0 + (ix + 0.5) * this.cell_mm;
 	centreY = (iy: number): number => this.y0 + (iy + 0.5) * this.cell_mm;
 
-	/** Calls `visit(cell, inside)` for every cell whose centre lies inside or within `reach_mm` of the ring. */
+	/**
+	 * Calls `visit(cell, inside)` for every cell whose centre lies inside or within `reach_mm` of the
+	 * ring. Row by row: the even-odd crossings of the row's centre line, sorted, give the inside runs
+	 * (the same crossing test as `pointInRing`, so the two agree cell for cell); only cells outside
+	 * the ring measure their distance to it.
+	 */
 	forCellsNear(
 		ring: Float64Array,
 		reach_mm: number,
@@ -73,11 +82,34 @@ export class RouteGrid {
 		const iy0 = Math.max(0, Math.floor((b.minY - reach_mm - this.y0) / c));
 		const iy1 = Math.min(this.ny - 1, Math.ceil((b.maxY + reach_mm - this.y0) / c));
 		const reach2 = reach_mm * reach_mm;
+		const n = ring.length;
+		const crossings = new Float64Array(n / 2);
 		for (let iy = iy0; iy <= iy1; iy++) {
 			const y = this.centreY(iy);
+			let m = 0;
+			for (let i = 0, j = n - 2; i < n; j = i, i += 2) {
+				const yi = ring[i + 1],
+					yj = ring[j + 1];
+				if (yi > y !== yj > y)
+					crossings[m++] = ((ring[j] - ring[i]) * (y - yi)) / (yj - yi) + ring[i];
+			}
+			// Insertion sort: a row crosses a ring at a handful of points.
+			for (let i = 1; i < m; i++) {
+				const x = crossings[i];
+				let j = i - 1;
+				while (j >= 0 && crossings[j] > x) {
+					crossings[j + 1] = crossings[j];
+					j--;
+				}
+				crossings[j + 1] = x;
+			}
+			const row = crossings;
+			// `k` counts the crossings at or left of the centre: inside while an odd number lie right of it.
+			let k = 0;
 			for (let ix = ix0; ix <= ix1; ix++) {
 				const x = this.centreX(ix);
-				const inside = pointInRing(ring, { x, y });
+				while (k < m && row[k] <= x) k++;
+				const inside = (m - k) % 2 === 1;
 				if (inside || (reach_mm > 0 && distanceToRing2(ring, x, y) < reach2 - 1e-12))
 					visit(iy * this.nx + ix, inside);
 			}
@@ -96,6 +128,7 @@ export class RouteGrid {
 
 	/** Adds `extra` to the cost of every cell whose centre lies inside the ring (or within reach). */
 	addCost(ring: Float64Array, extra: number, reach_mm = 0): void {
+		this.costVersion++;
 		this.forCellsNear(ring, reach_mm, (cell) => {
 			this.cost[cell] += extra;
 		});

@@ -60,6 +60,20 @@ function cellBox(grid: RouteGrid, cells: readonly number[]): Box {
 	return box;
 }
 
+/** Cleared per-cell masks kept for the next net (a net returns its masks cleared when it is done). */
+const spareMasks: Uint8Array[] = [];
+const SPARE_MASKS = 8;
+
+function takeMask(cells: number): Uint8Array {
+	const i = spareMasks.findIndex((m) => m.length === cells);
+	return i >= 0 ? spareMasks.splice(i, 1)[0] : new Uint8Array(cells);
+}
+
+function giveMask(mask: Uint8Array): void {
+	if (spareMasks.length === SPARE_MASKS) spareMasks.shift();
+	spareMasks.push(mask);
+}
+
 /** Up to this many pending terminals, one search from the tree looks for all of them at once. */
 const FEW_TERMINALS = 8;
 
@@ -93,7 +107,8 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	const leads: XY[][] = [];
 	const unreached: Terminal[] = [];
 	if (terminals.length === 0) return { leads, unreached };
-	const inTree = new Uint8Array(grid.nx * grid.ny);
+	const inTree = takeMask(grid.nx * grid.ny);
+	let targets: Uint8Array | null = null;
 	const treeCells: number[] = [];
 	const terminalAt = new Map<number, number[]>();
 	const cellsOf = terminals.map((t) => grid.cellsInside(t.ring));
@@ -141,7 +156,7 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 		}
 		if (pending.size <= FEW_TERMINALS) {
 			// Few terminals: search from the whole tree to all of them and take the cheapest reached.
-			const targets = new Uint8Array(grid.nx * grid.ny);
+			targets ??= takeMask(grid.nx * grid.ny);
 			const targetCells: number[] = [];
 			for (const p of pending)
 				for (const c of cellsOf[p]) {
@@ -155,6 +170,7 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 				net,
 				boxes: [...pending].map((p) => boxes[p])
 			});
+			for (const c of targetCells) targets[c] = 0;
 			if (!cells) {
 				for (const p of pending) unreached.push(terminals[p]);
 				pending.clear();
@@ -192,5 +208,8 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 		reach(next);
 		yield;
 	}
+	for (const c of treeCells) inTree[c] = 0;
+	giveMask(inTree);
+	if (targets) giveMask(targets);
 	return { leads, unreached };
 }
