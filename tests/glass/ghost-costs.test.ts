@@ -22,7 +22,8 @@ describe('ghost costs', () => {
 	const conductors = [strip(0.5, 29.5, 10), strip(0.5, 29.5, 2.2), strip(0.5, 29.5, 0.8)].map(
 		(ring) => ({ common: 1, ring })
 	);
-	const costOf = ghostCosts({ design, layout, grid, conductors });
+	const costs = ghostCosts({ design, layout, grid, conductors });
+	const costOf = (lit: number[]) => costs(lit).cost;
 	const at = (cost: Float32Array, x: number, y: number) =>
 		cost[Math.floor(y / 0.1) * grid.nx + Math.floor(x / 0.1)];
 

@@ -16,6 +16,8 @@ const VIEW_COST = 0.25;
 const GHOST_COST_VIEW = 400;
 /** The same behind the bezel, where a ghost switches but is hidden. */
 const GHOST_COST_BEZEL = 150;
+/** Keys of whole cost fields (negative, apart from the grid's own versions; see RouteGrid.setCost). */
+let nextKey = -1;
 
 /**
  * Cost grids for leads on one plate over the other plate's conductors: the viewing-area cost
@@ -28,7 +30,7 @@ export function ghostCosts(options: {
 	layout: GlassLayout;
 	grid: RouteGrid;
 	conductors: readonly { common: number; ring: Float64Array }[];
-}): (lit: readonly number[]) => Float32Array {
+}): (lit: readonly number[]) => { cost: Float32Array; key: number } {
 	const { design, layout, grid, conductors } = options;
 	const reach = design.glassArt.traceWidth_mm / 2;
 	const zones = crossingZones(grid, {
@@ -45,18 +47,19 @@ export function ghostCosts(options: {
 		});
 	const base = new Float32Array(n);
 	for (let cell = 0; cell < n; cell++) if (zones[cell] === ZONE_VIEW) base[cell] = VIEW_COST;
-	const made = new Map<string, Float32Array>();
+	const made = new Map<string, { cost: Float32Array; key: number }>();
 	return (lit) => {
-		const key = lit.join(',');
-		let cost = made.get(key);
-		if (!cost) {
-			cost = Float32Array.from(base);
+		const name = lit.join(',');
+		let entry = made.get(name);
+		if (!entry) {
+			const cost = Float32Array.from(base);
 			for (const c of lit) {
 				const layer = layers[c];
 				for (let cell = 0; cell < n; cell++) cost[cell] += layer[cell];
 			}
-			made.set(key, cost);
+			entry = { cost, key: nextKey-- };
+			made.set(name, entry);
 		}
-		return cost;
+		return entry;
 	};
 }

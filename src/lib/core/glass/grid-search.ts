@@ -49,6 +49,8 @@ export class GridSearch {
 	/** Bound on extra costs, built at the first costed search for the grid's cost version. */
 	private floor: CostFloor | null = null;
 	private floorVersion = -1;
+	/** Estimates for cost fields set whole under a key (negative versions), kept for reuse. */
+	private readonly keyedFloors = new Map<number, CostFloor>();
 
 	constructor(private readonly grid: RouteGrid) {
 		this.scratch = scratchFor(grid.nx * grid.ny);
@@ -242,8 +244,11 @@ export class GridSearch {
 		const { sources, target, net } = options;
 		const { dist, prev, stamp, queue: heap } = this.scratch;
 		if (cost && (!this.floor || this.floorVersion !== this.grid.costVersion)) {
-			this.floor = new CostFloor(this.grid);
-			this.floorVersion = this.grid.costVersion;
+			const version = this.grid.costVersion;
+			const kept = version < 0 ? this.keyedFloors.get(version) : undefined;
+			this.floor = kept ?? new CostFloor(this.grid);
+			if (version < 0 && !kept) this.keyedFloors.set(version, this.floor);
+			this.floorVersion = version;
 		}
 		this.setBoxes(options.boxes, cost && !field ? this.floor : null);
 		const epoch = this.scratch.nextEpoch();

@@ -92,7 +92,8 @@ export function routeCommonPlate(options: {
 	});
 	// Each common's own costs apply while it grows: its leads avoid the segment leads it would light.
 	const advance = (g: (typeof growing)[number]) => {
-		grid.cost.set(costs([g.net]));
+		const { cost, key } = costs([g.net]);
+		grid.setCost(cost, key);
 		const step = g.steps.next();
 		if (step.done) g.route = step.value;
 	};

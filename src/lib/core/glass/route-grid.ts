@@ -126,9 +126,18 @@ export class RouteGrid {
 		});
 	}
 
+	/**
+	 * Replaces the whole cost field. `key` names these values for the searches' cached estimates:
+	 * the same key must always come with the same values, and differ from any `addCost` version.
+	 */
+	setCost(values: Float32Array, key: number): void {
+		this.cost.set(values);
+		this.costVersion = key;
+	}
+
 	/** Adds `extra` to the cost of every cell whose centre lies inside the ring (or within reach). */
 	addCost(ring: Float64Array, extra: number, reach_mm = 0): void {
-		this.costVersion++;
+		this.costVersion = Math.max(0, this.costVersion) + 1;
 		this.forCellsNear(ring, reach_mm, (cell) => {
 			this.cost[cell] += extra;
 		});

@@ -97,7 +97,8 @@ function routeSegmentAttempt(options: {
 	const unrouted: Unrouted[] = [];
 	let missed = 0;
 	nets.forEach(({ pad, terminals, lit }, net) => {
-		grid.cost.set(costOf(lit));
+		const { cost, key } = costOf(lit);
+		grid.setCost(cost, key);
 		const steps = growNet({
 			grid,
 			search,
