@@ -1,12 +1,13 @@
 /**
  * The ghosts on the drawing always belong to the drawing on show: they come from the design
- * checks' worker for exactly that design, so while an electrode is being dragged the plates are
+ * checks' worker for exactly that design (ghosts made by dragging a lead across a plate), so while an electrode is being dragged the plates are
  * drawn without ghosts, and once the edit lands the ghosts of the new drawing appear — as many as
  * the glass panel counts.
  */
 import { expect, test, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import { parseDesignText } from '../../src/lib/core/design/parse-design';
+import { dragLeadIntoDigits, seg1Corner } from './ghost-lead';
 
 const ghostsInPanel = async (page: Page) =>
 	Number(/(\d+) ghost/.exec((await page.getByTestId('glass-trace-count').textContent())!)![1]);
@@ -27,6 +28,8 @@ test('ghosts are drawn only for the drawing they were checked on', async ({ page
 	await page.getByTestId('glass-generate').click();
 	const status = page.getByTestId('status');
 	await expect(status).toContainText('Undo: Generate plates and traces', { timeout: 90_000 });
+	// The generated drawing has no ghost: make some by hand first.
+	await dragLeadIntoDigits(page, seg1Corner());
 	const canvas = page.getByTestId('editor-canvas');
 	await expect(canvas).toHaveAttribute('data-ghosts', /^[1-9]\d*$/, { timeout: 30_000 });
 	await expect(page.getByTestId('glass-check')).toHaveAttribute('aria-busy', 'false');

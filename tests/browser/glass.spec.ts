@@ -11,8 +11,7 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { parseDesignText } from '../../src/lib/core/design/parse-design';
-import { planGlass } from '../../src/lib/core/glass/plan-glass';
+import { dragLeadIntoDigits, seg1Corner } from './ghost-lead';
 
 async function openGlassTab(page: Page) {
 	await page.goto('/');
@@ -29,13 +28,6 @@ async function generateInApp(page: Page) {
 		timeout: 90_000
 	});
 	await expect(page.getByTestId('glass-plan')).toHaveAttribute('data-state', 'idle');
-}
-
-/** The routing the app's worker computes for the demo (the same core function, deterministic). */
-function demoPlan() {
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	return { design: parsed.design, plan: planGlass(parsed.design) };
 }
 
 /** Counts pixels resvg paints (alpha > 0) in an SVG rendered 800 px wide. */
@@ -116,37 +108,14 @@ test('a trace point dragged by hand changes the glass check, and Ctrl+Z takes it
 	page
 }) => {
 	test.setTimeout(150_000);
-	const { design, plan } = demoPlan();
-	const seg1 = design.segmentLines.find((l) => l.name === 'SEG1')!;
-	const lead = plan.glassArt.traces.find(
-		(t) => t.plate === 'segment' && t.net === seg1.id && t.points.length >= 3
-	)!;
-	expect(lead).toBeDefined();
-	const corner = lead.points[1];
+	const corner = seg1Corner();
 	await openGlassTab(page);
 	await generateInApp(page);
-	await page.getByTestId('glass-show-plates').check();
-	await page.getByTestId('tool-points').click();
 	const count = page.getByTestId('glass-trace-count');
 	const before = (await count.textContent())!;
 
 	// a corner of SEG1's lead, dragged into the middle of the digits
-	const stage = page.getByTestId('editor-stage');
-	const [scale, offsetX, offsetY] = (await stage.getAttribute('data-view'))!.split(' ').map(Number);
-	const box = (await stage.boundingBox())!;
-	const at = (x_mm: number, y_mm: number) => ({
-		x: box.x + offsetX + x_mm * scale,
-		y: box.y + offsetY + y_mm * scale
-	});
-	const from = at(corner.x, corner.y);
-	const to = at(22, 17);
-	await page.mouse.move(from.x, from.y);
-	await page.mouse.down();
-	for (let k = 1; k <= 8; k++)
-		await page.mouse.move(from.x + ((to.x - from.x) * k) / 8, from.y + ((to.y - from.y) * k) / 8);
-	await page.mouse.up();
-
-	await expect(page.getByTestId('status')).toContainText('Undo: Move point');
+	await dragLeadIntoDigits(page, corner);
 	await expect(page.getByTestId('tool-options')).toContainText('1 point selected');
 	// the lead now crosses other commons' back plates in the viewing area: more ghosts
 	await expect(count).not.toHaveText(before);
@@ -162,9 +131,13 @@ test('clicking a ghost finding shows the plates, zooms to it and picks the lead 
 	page
 }) => {
 	test.setTimeout(150_000);
+	const corner = seg1Corner();
 	await openGlassTab(page);
 	await generateInApp(page);
-	// Generating shows the plates; hide them to see the finding bring them back.
+	// The generated drawing has no ghost: make one by hand, then hide the plates and let the
+	// finding bring them back.
+	await dragLeadIntoDigits(page, corner);
+	await page.getByTestId('tool-pick').click();
 	await page.getByTestId('glass-show-plates').uncheck();
 	await expect(page.getByTestId('glass-show-plates')).not.toBeChecked();
 	const zoom = await page.getByTestId('editor-stage').getAttribute('data-view');
