@@ -2,7 +2,8 @@
  * Automatic routing of both plates, in three passes: the segment plate over the bare back-plate
  * pieces (where the leads want to go), then the common plate keeping its leads from under those
  * segment leads where they would light a ghost, then the segment plate again over the finished
- * common plate, starting from the net order that worked on the first pass.
+ * common plate, starting from the net order that worked on the first pass — unless no first-pass
+ * lead lies over a common-plate lead it would light, in which case the first pass stands.
  */
 import type { Design } from '../design/schema';
 import { platePieces } from './back-plate-pieces';
@@ -11,6 +12,7 @@ import type { GlassRouting, PlateRouting } from './plate-routing';
 import { outsideInOrder, routeCommonPlate } from './route-common-plate';
 import { routeSegmentPlate } from './route-segment-plate';
 import { traceRings } from './trace-rings';
+import { leadsCrossBuses } from './leads-cross-buses';
 import { dotRing, transferPoints } from './transfer-points';
 
 export type { GlassRouting, Unrouted } from './plate-routing';
@@ -44,7 +46,8 @@ export function routeGlass(design: Design): GlassRouting {
 	for (const order of [null, outsideInOrder(design, pieces)]) {
 		const result = routeCommonPlate({ design, layout, pieces, order, front });
 		if (!common || result.missed < common.missed) common = result;
-		if (result.missed === 0) break;
+		// The second order helps when a few pieces are walled in; a crowded plate stays crowded.
+		if (result.missed === 0 || result.missed > Math.max(2, pieces.length / 10)) break;
 	}
 	const commonConductors = [
 		...bare,
@@ -52,7 +55,16 @@ export function routeGlass(design: Design): GlassRouting {
 			traceRings(t).map((ring) => ({ common: commons.indexOf(t.net), ring }))
 		)
 	].filter((c) => c.common >= 0);
-	const segment = routeSegmentPlate({ design, layout, commonConductors, start: first.order });
+	const stands = !leadsCrossBuses({
+		design,
+		layout,
+		leads: first.traces,
+		buses: common!.traces,
+		litOf: (net) => lines.get(net) ?? all
+	});
+	const segment = stands
+		? first
+		: routeSegmentPlate({ design, layout, commonConductors, start: first.order });
 	return {
 		traces: [...common!.traces, ...segment.traces],
 		unrouted: [...common!.unrouted, ...segment.unrouted]

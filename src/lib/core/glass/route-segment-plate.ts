@@ -30,6 +30,9 @@ const inset = (r: Rect, d: number): Rect => ({
 	height_mm: r.height_mm - 2 * d
 });
 
+/** Where segment-plate leads may run: the front glass, 0.3 mm in from its edge. */
+export const segmentDomain = (layout: GlassLayout): Rect => inset(layout.glass, 0.3);
+
 interface SegmentNet {
 	pad: GlassLayout['pads'][number];
 	terminals: Terminal[];
@@ -89,7 +92,7 @@ function routeSegmentAttempt(options: {
 	const width = design.glassArt.traceWidth_mm;
 	const gap = design.rules.minGap_mm;
 	const clearance = gap + width / 2;
-	const grid = new RouteGrid({ domain: inset(layout.glass, 0.3), cell_mm: width + gap });
+	const grid = new RouteGrid({ domain: segmentDomain(layout), cell_mm: width + gap });
 	const search = new GridSearch(grid);
 	nets.forEach((n, k) => n.terminals.forEach((t) => grid.claim(t.ring, k, clearance)));
 	const costOf = ghostCosts({ design, layout, grid, conductors: commonConductors });
