@@ -112,18 +112,26 @@ describe('ghosts, shorts and bad geometry', () => {
 		{ x: 22, y: 8.07 }
 	];
 
+	/** The hand lead's one overlap: (COM2, SEG1) at `where`, 0.208 mm² by hand. */
+	function expectHandOverlap(report: ReturnType<typeof checkGlass>, where: string) {
+		const ghosts = report.ghosts.filter((g) => g.conductor === 'hand');
+		expect(ghosts.map((g) => [g.commonName, g.lineName, g.where])).toEqual([
+			['COM2', 'SEG1', where]
+		]);
+		expectWithin(
+			[{ label: `${where} overlap area`, expected: 0.208, actual: ghosts[0].area_mm2 }],
+			{
+				tolerance: 1e-9,
+				unit: 'mm²',
+				source: 'hand calculation: 5.2 mm × 0.04 mm strip'
+			}
+		);
+	}
+
 	it("reports a hand lead across another common's back plate with its pair and area", () => {
 		const d = withHandTrace(underE2, 0.04, crossedPairGlass);
 		const report = checkGlass(d);
-		const ghosts = report.ghosts.filter((g) => g.conductor === 'hand');
-		expect(ghosts.map((g) => [g.commonName, g.lineName, g.where])).toEqual([
-			['COM2', 'SEG1', 'visible']
-		]);
-		expectWithin([{ label: 'ghost area', expected: 0.208, actual: ghosts[0].area_mm2 }], {
-			tolerance: 1e-9,
-			unit: 'mm²',
-			source: 'hand calculation: 5.2 mm × 0.04 mm strip'
-		});
+		expectHandOverlap(report, 'visible');
 		const f = report.findings.find((x) => x.code === 'glass.ghost-visible');
 		expect(f?.message).toContain('(COM2, SEG1)');
 		expect(f?.electrodes).toContain('e2');
@@ -138,15 +146,7 @@ describe('ghosts, shorts and bad geometry', () => {
 		// the overlap only sees the unselected voltage (common practice: leads cross such commons).
 		const d = withHandTrace(underE2, 0.04);
 		const report = checkGlass(d);
-		const ghosts = report.ghosts.filter((g) => g.conductor === 'hand');
-		expect(ghosts.map((g) => [g.commonName, g.lineName, g.where])).toEqual([
-			['COM2', 'SEG1', 'idle']
-		]);
-		expectWithin([{ label: 'idle overlap area', expected: 0.208, actual: ghosts[0].area_mm2 }], {
-			tolerance: 1e-9,
-			unit: 'mm²',
-			source: 'hand calculation: 5.2 mm × 0.04 mm strip'
-		});
+		expectHandOverlap(report, 'idle');
 		const idle = report.findings.find((x) => x.code === 'glass.ghost-idle');
 		expect(idle?.severity).toBe('pass');
 		expect(idle?.message).toContain('(COM2, SEG1)');
