@@ -1,5 +1,5 @@
 /**
- * Plausible one-line mistakes in the physics and drive core (sign, square, constant, wrong
+ * Plausible one-line mistakes in the physics, drive and glass core (sign, square, constant, wrong
  * operand, off by one). `npm run mutate` applies each to a temporary copy of the project and runs
  * the tests that guard that code: a mutant that survives is a missing test.
  */
@@ -237,5 +237,24 @@ export const MUTANTS: readonly Mutant[] = [
 		file: 'src/lib/core/cell/fluid-limits.ts',
 		edits: [['(t) => t < options.clearing_C', '(t) => t <= options.clearing_C']],
 		tests: ['tests/cell/fluid-limits.test.ts']
+	},
+	{
+		id: 'ghost check: a crossing of an unused pair counted as lit',
+		file: 'src/lib/core/glass/ghost-check.ts',
+		edits: [
+			[
+				"const where: GhostPlace = pair.length > 0 ? placed : 'idle';",
+				'const where: GhostPlace = placed;'
+			]
+		],
+		tests: ['tests/glass/glass-check.test.ts', 'tests/glass/ghost-electrodes.test.ts']
+	},
+	{
+		id: 'ghost costs: a crossing behind the bezel as dear as in view',
+		file: 'src/lib/core/glass/ghost-costs.ts',
+		edits: [
+			['zone === ZONE_BEZEL ? GHOST_COST_BEZEL : 0', 'zone === ZONE_BEZEL ? GHOST_COST_VIEW : 0']
+		],
+		tests: ['tests/glass/ghost-costs.test.ts']
 	}
 ];
