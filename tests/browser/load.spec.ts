@@ -8,7 +8,8 @@ test('the load tab shows current, battery life, per-pin tables and plots; a budg
 	await openApp(page);
 	await page.getByTestId('view-load').click();
 	await expect(page.getByTestId('load-current')).toContainText('µA');
-	await expect(page.getByTestId('load-lines').locator('tbody tr')).toHaveCount(14);
+	// 29 segment lines: 8 for the digits, one each for the 21 icons, bar steps and dots.
+	await expect(page.getByTestId('load-lines').locator('tbody tr')).toHaveCount(29);
 	await expect(page.getByTestId('load-commons').locator('tbody tr')).toHaveCount(4);
 	// One line per pattern (all on, a typical reading, all off). The reading's line passes
 	// through the figure shown above the plots: the current at the checked temperature and at
