@@ -33,6 +33,10 @@ import { ringBounds } from './rings';
  */
 export type GhostPlace = 'visible' | 'bezel' | 'seal' | 'idle';
 
+/** Whether the ghost switches where fluid is (in view or behind the bezel): the ones drawn and counted. */
+export const ghostSwitches = (g: { where: GhostPlace }): boolean =>
+	g.where === 'visible' || g.where === 'bezel';
+
 export interface Ghost {
 	common: string;
 	commonName: string;

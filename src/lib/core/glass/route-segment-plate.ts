@@ -17,7 +17,7 @@ import type { GlassLayout } from './layout';
 import type { PlateRouting, Unrouted } from './plate-routing';
 import { rectRing } from './rings';
 import { RouteGrid } from './route-grid';
-import { growNet, type Terminal } from './route-net';
+import { routeNet, type Terminal } from './route-net';
 import { dotRing, transferPoints } from './transfer-points';
 
 /** Routing attempts at most (the first plus retries with failed nets first). */
@@ -102,7 +102,7 @@ function routeSegmentAttempt(options: {
 	nets.forEach(({ pad, terminals, lit }, net) => {
 		const { cost, key } = costOf(lit);
 		grid.setCost(cost, key);
-		const steps = growNet({
+		const route = routeNet({
 			grid,
 			search,
 			net,
@@ -110,9 +110,6 @@ function routeSegmentAttempt(options: {
 			width_mm: width,
 			clearance_mm: clearance
 		});
-		let step = steps.next();
-		while (!step.done) step = steps.next();
-		const route = step.value;
 		route.leads.forEach((points, i) =>
 			traces.push({
 				id: `ts-${pad.net}-${i + 1}`,

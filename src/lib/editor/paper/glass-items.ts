@@ -5,7 +5,7 @@
  * out at any zoom. A view of the core's artwork; rebuilt when the design changes.
  */
 import type { GlassArtwork } from '$lib/core/glass/artwork';
-import type { Ghost } from '$lib/core/glass/ghost-check';
+import { ghostSwitches, type Ghost } from '$lib/core/glass/ghost-check';
 import type { PaperScene } from './paper-scene';
 
 type Ring = Float64Array;
@@ -66,6 +66,5 @@ export function drawGlassArt(
 			else if (c.kind === 'pad') path(c.rings, { fill: '#b08a1a', alpha: 0.85 });
 			else if (c.kind === 'transfer') path(c.rings, { fill: '#5a5f66', alpha: 0.6 });
 	for (const g of options.ghosts)
-		if (g.where === 'visible' || g.where === 'bezel')
-			path([g.ring], { fill: '#ff1a1a', alpha: 0.95, stroke: '#ff1a1a' });
+		if (ghostSwitches(g)) path([g.ring], { fill: '#ff1a1a', alpha: 0.95, stroke: '#ff1a1a' });
 }
