@@ -27,15 +27,9 @@ import { leadElectrodes } from './lead-reach';
 import { nearPairs } from './near-pairs';
 import { ringBounds } from './rings';
 
-/**
- * Where a ghost lies, or `idle` when no electrode uses its (common, line) pair: the driver never
- * selects that pair, so the overlap only ever sees the unselected voltage and stays dark.
- */
-export type GhostPlace = 'visible' | 'bezel' | 'seal' | 'idle';
+import type { GhostPlace } from './ghost-place';
 
-/** Whether the ghost switches where fluid is (in view or behind the bezel): the ones drawn and counted. */
-export const ghostSwitches = (g: { where: GhostPlace }): boolean =>
-	g.where === 'visible' || g.where === 'bezel';
+export { ghostSwitches, type GhostPlace } from './ghost-place';
 
 export interface Ghost {
 	common: string;

@@ -5,7 +5,8 @@
  * out at any zoom. A view of the core's artwork; rebuilt when the design changes.
  */
 import type { GlassArtwork } from '$lib/core/glass/artwork';
-import { ghostSwitches, type Ghost } from '$lib/core/glass/ghost-check';
+import type { Ghost } from '$lib/core/glass/ghost-check';
+import { ghostSwitches } from '$lib/core/glass/ghost-place';
 import type { PaperScene } from './paper-scene';
 
 type Ring = Float64Array;
