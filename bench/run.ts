@@ -222,21 +222,38 @@ rows.push(
 );
 
 {
-	// Glass drawing of 500 electrodes: back plates, traces of both plates, ghost check.
-	const { benchGlassDesign } = await import('./glass-design');
+	// Glass drawing of 500 electrodes (a column bar graph at 1/8 duty): back plates, traces of both
+	// plates, ghost check; and the router on a crowded glass it cannot finish, for its give-up time.
+	const { benchGlassDesign, crowdedGlassDesign } = await import('./glass-design');
 	const { platePieces } = await import('../src/lib/core/glass/back-plate-pieces');
 	const { planGlass } = await import('../src/lib/core/glass/plan-glass');
 	const { buildArtwork } = await import('../src/lib/core/glass/artwork');
 	const { ghostCheck } = await import('../src/lib/core/glass/ghost-check');
 	const glass = benchGlassDesign(500);
-	const planned = { ...glass, glassArt: planGlass(glass).glassArt };
+	const plan = planGlass(glass);
+	if (plan.findings.length > 0)
+		throw new Error(`the bench glass no longer routes whole: ${plan.findings[0].message}`);
+	const planned = { ...glass, glassArt: plan.glassArt };
 	rows.push(measure('glass: back plates of 500 electrodes', 300, 5, () => void platePieces(glass)));
 	rows.push(
-		measure('glass: route both plates, 500 electrodes', 300, 3, () => void planGlass(glass))
+		measure('glass: route both plates, 500 electrodes', 300, 5, () => void planGlass(glass))
 	);
 	rows.push(
 		measure('glass: artwork + ghost check, 500 electrodes', 300, 5, () => {
 			ghostCheck(planned, buildArtwork(planned));
+		})
+	);
+	rows.push(
+		measure('glass: plates, leads and ghost check together, 500', 300, 5, () => {
+			platePieces(glass);
+			const routed = { ...glass, glassArt: planGlass(glass).glassArt };
+			ghostCheck(routed, buildArtwork(routed));
+		})
+	);
+	const crowded = crowdedGlassDesign(500);
+	rows.push(
+		measure('glass: route a crowded glass it cannot finish, 500', null, 3, () => {
+			planGlass(crowded);
 		})
 	);
 }

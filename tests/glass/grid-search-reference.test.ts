@@ -1,8 +1,8 @@
 /**
  * The routing grid's least-cost search against the textbook algorithm (Dijkstra, Numer. Math. 1,
  * 1959), written out here without a queue: a linear scan for the cheapest unsettled state over
- * (cell, heading) states with the same step rule (1 + the cell's extra cost, BEND_COST on a change
- * of heading after the first step; a cell passable when free, the net's own, or a target). On small
+ * (cell, heading) states with the same step rule (STEP_COST + the cell's extra cost, BEND_COST on a
+ * change of heading after the first step; a cell passable when free, the net's own, or a target). On small
  * random plates every path the search returns must be a valid walk from a source to a target and
  * cost exactly the reference optimum, and the search must find no path exactly when none exists.
  */
@@ -11,7 +11,9 @@ import { GridSearch } from '../../src/lib/core/glass/grid-search';
 import { BLOCKED, FREE, RouteGrid } from '../../src/lib/core/glass/route-grid';
 import { expectWithin, type ReferenceCase } from '../helpers/tolerance';
 
-const BEND_COST = 4;
+/** The search's step rule, in its cost units. */
+const STEP_COST = 4;
+const BEND_COST = 16;
 const DX = [1, -1, 0, 0];
 const DY = [0, 0, 1, -1];
 
@@ -61,7 +63,7 @@ function referenceCost(c: Case): number {
 			const next = jy * nx + jx;
 			if (!passable(c, next)) continue;
 			const bend = fromSource[best] || h === (best & 3) ? 0 : BEND_COST;
-			const nd = dist[best] + 1 + c.grid.cost[next] + bend;
+			const nd = dist[best] + STEP_COST + c.grid.cost[next] + bend;
 			const ns = next * 4 + h;
 			if (nd < dist[ns]) {
 				dist[ns] = nd;
@@ -83,7 +85,7 @@ function pathCost(c: Case, path: number[]): number {
 		const h = d === 1 ? 0 : d === -1 ? 1 : d === nx ? 2 : d === -nx ? 3 : -1;
 		expect(h).toBeGreaterThanOrEqual(0);
 		expect(passable(c, path[i])).toBe(true);
-		total += 1 + c.grid.cost[path[i]] + (heading >= 0 && h !== heading ? BEND_COST : 0);
+		total += STEP_COST + c.grid.cost[path[i]] + (heading >= 0 && h !== heading ? BEND_COST : 0);
 		heading = h;
 	}
 	return total;

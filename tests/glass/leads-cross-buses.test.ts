@@ -1,6 +1,6 @@
 /**
- * A segment plate routed first stands once the common plate is laid only if none of its leads lies
- * over a common-plate lead it would light. On the two-electrode glass (viewing area 3–27 × 3–14 mm):
+ * A net of a segment plate routed first stands once the common plate is laid only if none of its
+ * leads lies over a common-plate lead it would light. On the two-electrode glass (viewing area 3–27 × 3–14 mm):
  * a SEG1 lead along y = 11 and a COM2 bus down x = 17.5 cross at (17.5, 11) inside the viewing area.
  */
 import { describe, expect, it } from 'vitest';
@@ -23,7 +23,7 @@ describe('leads over buses', () => {
 	const lead = trace('lead', 'segment', 'seg1', [7, 8, 7, 11, 22, 11]);
 	const bus = trace('bus', 'common', 'com2', [17.5, 8, 17.5, 13]);
 	const cross = (lit: number[], buses = [bus]) =>
-		leadsCrossBuses({ design, layout, leads: [lead], buses, litOf: () => lit });
+		leadsCrossBuses({ design, layout, leads: [lead], buses, litOf: () => lit }).has('seg1');
 
 	it('finds a lead over a bus of a common it lights', () => {
 		expect(cross([0, 1])).toBe(true);
@@ -40,6 +40,19 @@ describe('leads over buses', () => {
 		const sealBus = trace('bus', 'common', 'com2', [0.6, 10, 1.4, 10]);
 		expect(
 			leadsCrossBuses({ design, layout, leads: [under], buses: [sealBus], litOf: () => [0, 1] })
-		).toBe(false);
+				.size
+		).toBe(0);
+	});
+
+	it('names only the nets whose leads cross', () => {
+		const other = trace('other', 'segment', 'seg2', [7, 4, 12, 4]);
+		const crossing = leadsCrossBuses({
+			design,
+			layout,
+			leads: [lead, other],
+			buses: [bus],
+			litOf: () => [0, 1]
+		});
+		expect([...crossing]).toEqual(['seg1']);
 	});
 });

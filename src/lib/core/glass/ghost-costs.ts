@@ -11,13 +11,12 @@ import { crossingZones, ZONE_BEZEL, ZONE_VIEW } from './crossing-zones';
 import type { GlassLayout } from './layout';
 import type { RouteGrid } from './route-grid';
 
-const VIEW_COST = 0.25;
+/** Extra cost of a cell in the viewing area: a quarter of a step (STEP_COST = 4 units). */
+const VIEW_COST = 1;
 /** Extra cost per cell of a lead over a common it would light a ghost with, in the viewing area. */
-const GHOST_COST_VIEW = 400;
+const GHOST_COST_VIEW = 1600;
 /** The same behind the bezel, where a ghost switches but is hidden. */
-const GHOST_COST_BEZEL = 150;
-/** Keys of whole cost fields (negative, apart from the grid's own versions; see RouteGrid.setCost). */
-let nextKey = -1;
+const GHOST_COST_BEZEL = 600;
 
 /**
  * Cost grids for leads on one plate over the other plate's conductors: the viewing-area cost
@@ -30,7 +29,7 @@ export function ghostCosts(options: {
 	layout: GlassLayout;
 	grid: RouteGrid;
 	conductors: readonly { common: number; ring: Float64Array }[];
-}): (lit: readonly number[]) => { cost: Float32Array; key: number } {
+}): (lit: readonly number[]) => Float32Array {
 	const { design, layout, grid, conductors } = options;
 	const reach = design.glassArt.traceWidth_mm / 2;
 	const zones = crossingZones(grid, {
@@ -47,19 +46,18 @@ export function ghostCosts(options: {
 		});
 	const base = new Float32Array(n);
 	for (let cell = 0; cell < n; cell++) if (zones[cell] === ZONE_VIEW) base[cell] = VIEW_COST;
-	const made = new Map<string, { cost: Float32Array; key: number }>();
+	const made = new Map<string, Float32Array>();
 	return (lit) => {
 		const name = lit.join(',');
-		let entry = made.get(name);
-		if (!entry) {
-			const cost = Float32Array.from(base);
+		let cost = made.get(name);
+		if (!cost) {
+			cost = Float32Array.from(base);
 			for (const c of lit) {
 				const layer = layers[c];
 				for (let cell = 0; cell < n; cell++) cost[cell] += layer[cell];
 			}
-			entry = { cost, key: nextKey-- };
-			made.set(name, entry);
+			made.set(name, cost);
 		}
-		return entry;
+		return cost;
 	};
 }

@@ -3,30 +3,37 @@
  * (cell, heading) states, with 4-neighbour steps, so a bend costs extra and leads come out as few
  * straight runs. Many sources, many targets; the search stops at the first target reached.
  *
- * Step cost = 1 + the cell's extra cost; a change of heading adds BEND_COST. A cell is passable
- * for net k when it is FREE or owned by k; target cells are always enterable. Before the search a
- * plain flood fill (cells only, no costs) asks whether any target can be reached at all, so a lead
- * that cannot exist costs one sweep of its region rather than a full least-cost search. A costed
- * search that runs past its budget of queue pops gives way to the plain shortest path (extra costs
- * ignored): the lead exists, it may light more ghosts.
+ * Costs are whole numbers of cost units: a step costs STEP_COST, a change of heading BEND_COST
+ * more, entering a cell its extra cost from the grid (in the same units) — except a cell of the
+ * net's own home (the clearance around its own terminals, where a lead only extends the conductor
+ * it joins), which costs no extra. A cell is passable for net k when it is FREE or owned by k;
+ * target cells are always enterable. Before the search a plain flood fill (cells only, no costs),
+ * from both ends in turn, asks whether any target can be reached at all, so a lead out of or into
+ * a closed-in region costs one sweep of it rather than a full least-cost search; a fill still
+ * undecided after a few thousand cells leaves the question to the search (the ends are open), and
+ * is finished only if the search finds nothing. A costed search that runs past its budget of queue
+ * pops gives way to the plain shortest path (extra costs ignored): the lead exists, it may light
+ * more ghosts.
  *
- * Distance estimates (admissible: every step costs at least 1): the costed search takes the
- * Manhattan distance to the nearest target box plus the extra cost no lead can avoid near its ends
- * (`CostFloor`); the plain search takes the breadth-first steps from the targets through the net's
- * passable cells (Moore 1959), exact but for bends, and skips cells from which no target can be
- * reached. The queue is a bucket queue while costs are whole numbers (`StateQueue`); the scratch
- * arrays are shared between searches and grids (`SearchScratch`), stamped per search.
+ * Distance estimates (admissible: every step costs at least STEP_COST): the costed search takes
+ * the Manhattan distance to the nearest target box; the plain search takes the breadth-first steps
+ * from the targets through the net's passable cells (Moore 1959), exact but for bends, and skips
+ * cells from which no target can be reached. Whole-number costs keep the queue a bucket queue
+ * (`StateQueue`); the scratch arrays are shared between searches and grids (`SearchScratch`),
+ * stamped per search.
  */
 import { FREE, type RouteGrid } from './route-grid';
-import { CostFloor } from './cost-floor';
 import { scratchFor, type SearchScratch } from './search-scratch';
 import { stepField } from './step-field';
 
-const BEND_COST = 4;
-/** Weight on the distance estimate (weighted A*, Pohl 1970): faster, paths at most this factor dearer. */
-const HEURISTIC_WEIGHT = 1;
+/** Cost of one step, in cost units: a quarter step is the smallest extra cost a cell carries. */
+export const STEP_COST = 4;
+/** Extra cost of a change of heading. */
+export const BEND_COST = 16;
 /** Queue pops the costed search may take before the plain shortest path is taken instead. */
 const COSTED_POPS = 60_000;
+/** Cells the fill before a search may sweep before it leaves the question to the search. */
+const QUICK_FILL_CELLS = 4096;
 const DX = Int32Array.of(1, -1, 0, 0);
 const DY = Int32Array.of(0, 0, 1, -1);
 /** Local copy: a module-level constant reads cheaper in the hot loops than an imported binding. */
@@ -40,17 +47,6 @@ export class GridSearch {
 	pops = 0;
 	private boxes = new Int32Array(32);
 	private boxCount = 0;
-	/** Per box, the least steps from its cells to a cell below each cost level. */
-	private boxT = new Float64Array(16);
-	private w0 = 0;
-	private w1 = 0;
-	private r0: Int32Array = EMPTY;
-	private r1: Int32Array = EMPTY;
-	/** Bound on extra costs, built at the first costed search for the grid's cost version. */
-	private floor: CostFloor | null = null;
-	private floorVersion = -1;
-	/** Estimates for cost fields set whole under a key (negative versions), kept for reuse. */
-	private readonly keyedFloors = new Map<number, CostFloor>();
 
 	constructor(private readonly grid: RouteGrid) {
 		this.scratch = scratchFor(grid.nx * grid.ny);
@@ -79,6 +75,19 @@ export class GridSearch {
 		net: number;
 		targetCells?: readonly number[];
 	}): boolean {
+		return this.fill(options, Infinity) as boolean;
+	}
+
+	/** The fill of `reachable`, giving up (null) once it has swept `maxCells` cells undecided. */
+	private fill(
+		options: {
+			sources: readonly number[];
+			target: Uint8Array;
+			net: number;
+			targetCells?: readonly number[];
+		},
+		maxCells: number
+	): boolean | null {
 		const { floodA: a, floodB: b, queueA: qa, queueB: qb } = this.scratch;
 		const { nx, ny, owner } = this.grid;
 		const n = nx * ny;
@@ -107,6 +116,7 @@ export class GridSearch {
 				this.sourceSideDry = true;
 				return false;
 			}
+			if (ha + hb > maxCells) return null;
 			// One cell of the sources' side: a target or the other side's mark ends the fill.
 			let cell = qa[ha++];
 			let ix = cell % nx;
@@ -161,10 +171,19 @@ export class GridSearch {
 		boxes: readonly (readonly [number, number, number, number])[];
 		/** The target cells as a list, for a fill from both ends. */
 		targetCells?: readonly number[];
+		/**
+		 * Per cell the net whose home it is: where a lead of that net meets its own terminal (within
+		 * the clearance of it) and only extends it, so the grid's extra cost does not apply.
+		 */
+		home?: Int32Array;
 	}): number[] | null {
-		if (!this.reachable(options)) return null;
+		// A short fill settles the common case of a closed-in end cheaply; an open one is left to
+		// the search, and only when that finds nothing does the whole fill say whether a way exists.
+		const quick = this.fill(options, QUICK_FILL_CELLS);
+		if (quick === false) return null;
 		const costed = this.leastCost({ ...options, useCost: true, maxPops: COSTED_POPS });
 		if (costed) return costed;
+		if (quick === null && !this.reachable(options)) return null;
 		const field = options.targetCells
 			? stepField({
 					grid: this.grid,
@@ -176,54 +195,22 @@ export class GridSearch {
 		return this.leastCost({ ...options, useCost: false, maxPops: Infinity, field });
 	}
 
-	/**
-	 * Distance estimate from cell (ix, iy) to the nearest of the current boxes: the steps, plus in a
-	 * costed search the extra cost no lead can avoid near its ends (see CostFloor), per box.
-	 */
-	private estimate(cell: number, ix: number, iy: number): number {
+	/** Distance estimate from cell (ix, iy): STEP_COST times the steps to the nearest box. */
+	private estimate(ix: number, iy: number): number {
 		const b = this.boxes;
-		const { w0, w1, r0, r1, boxT } = this;
-		const d0 = w0 > 0 && r0[cell] > 0 ? r0[cell] - 1 : 0;
-		const d1 = w1 > 0 && r1[cell] > 0 ? r1[cell] - 1 : 0;
 		let best = Infinity;
-		for (let k = 0; k < this.boxCount; k++) {
-			const q = 4 * k;
+		for (let q = 0, end = 4 * this.boxCount; q < end; q += 4) {
 			const dx = b[q] - ix > 0 ? b[q] - ix : ix - b[q + 2] > 0 ? ix - b[q + 2] : 0;
 			const dy = b[q + 1] - iy > 0 ? b[q + 1] - iy : iy - b[q + 3] > 0 ? iy - b[q + 3] : 0;
-			const m = (dx + dy) * HEURISTIC_WEIGHT;
-			let h = m;
-			if (w0 > 0) {
-				const a = d0 + boxT[2 * k];
-				h += w0 * (m < a ? m : a);
-			}
-			if (w1 > 0) {
-				const a = d1 + boxT[2 * k + 1];
-				h += w1 * (m < a ? m : a);
-			}
-			if (h < best) best = h;
+			if (dx + dy < best) best = dx + dy;
 		}
-		return best === Infinity ? 0 : best;
+		return best === Infinity ? 0 : best * STEP_COST;
 	}
 
-	/** Takes the boxes and, for a costed search, each box's least steps to cheaper cells. */
-	private setBoxes(
-		boxes: readonly (readonly [number, number, number, number])[],
-		floor: CostFloor | null
-	): void {
-		if (this.boxes.length < boxes.length * 4) {
-			this.boxes = new Int32Array(boxes.length * 8);
-			this.boxT = new Float64Array(boxes.length * 4);
-		}
-		boxes.forEach((box, k) => {
-			this.boxes.set(box, k * 4);
-			this.boxT[2 * k] = floor ? floor.leastReachIn(0, box) : 0;
-			this.boxT[2 * k + 1] = floor ? floor.leastReachIn(1, box) : 0;
-		});
+	private setBoxes(boxes: readonly (readonly [number, number, number, number])[]): void {
+		if (this.boxes.length < boxes.length * 4) this.boxes = new Int32Array(boxes.length * 8);
+		boxes.forEach((box, k) => this.boxes.set(box, k * 4));
 		this.boxCount = boxes.length;
-		this.w0 = floor ? floor.weight[0] : 0;
-		this.w1 = floor ? floor.weight[1] : 0;
-		this.r0 = floor ? floor.reach[0] : EMPTY;
-		this.r1 = floor ? floor.reach[1] : EMPTY;
 	}
 
 	private leastCost(options: {
@@ -232,6 +219,8 @@ export class GridSearch {
 		net: number;
 		boxes: readonly (readonly [number, number, number, number])[];
 		targetCells?: readonly number[];
+		/** Per cell the net whose home it is (see `search`). */
+		home?: Int32Array;
 		useCost: boolean;
 		maxPops: number;
 		/** Mark of a step field from the targets to steer by, instead of the boxes. */
@@ -241,22 +230,16 @@ export class GridSearch {
 		const field = options.field ?? 0;
 		const { steps, stepsMark } = this.scratch;
 		const cost = options.useCost ? this.grid.cost : null;
+		const home = options.home ?? null;
 		const { sources, target, net } = options;
 		const { dist, prev, stamp, queue: heap } = this.scratch;
-		if (cost && (!this.floor || this.floorVersion !== this.grid.costVersion)) {
-			const version = this.grid.costVersion;
-			const kept = version < 0 ? this.keyedFloors.get(version) : undefined;
-			this.floor = kept ?? new CostFloor(this.grid);
-			if (version < 0 && !kept) this.keyedFloors.set(version, this.floor);
-			this.floorVersion = version;
-		}
-		this.setBoxes(options.boxes, cost && !field ? this.floor : null);
+		this.setBoxes(options.boxes);
 		const epoch = this.scratch.nextEpoch();
 		heap.clear();
 		for (const cell of sources) {
 			const ix = cell % nx;
 			if (field && stepsMark[cell] !== field) continue;
-			const f = field ? steps[cell] : this.estimate(cell, ix, (cell - ix) / nx);
+			const f = field ? steps[cell] * STEP_COST : this.estimate(ix, (cell - ix) / nx);
 			for (let h = 0; h < 4; h++) {
 				const s = cell * 4 + h;
 				stamp[s] = epoch;
@@ -286,14 +269,15 @@ export class GridSearch {
 				const o = owner[next];
 				if (o !== FREE_CELL && o !== net && !target[next]) continue;
 				if (field && stepsMark[next] !== field) continue;
-				const nd = g + 1 + (cost ? cost[next] : 0) + (h === heading || atSource ? 0 : BEND_COST);
+				const extra = cost === null || (home !== null && home[next] === net) ? 0 : cost[next];
+				const nd = g + STEP_COST + extra + (h === heading || atSource ? 0 : BEND_COST);
 				const ns = next * 4 + h;
 				if (stamp[ns] !== epoch || nd < dist[ns]) {
 					stamp[ns] = epoch;
 					dist[ns] = nd;
 					prev[ns] = state;
 					// The estimate: steps from the targets with a step field, else by the boxes.
-					heap.push(nd + (field ? steps[next] : this.estimate(next, jx, jy)), nd, ns);
+					heap.push(nd + (field ? steps[next] * STEP_COST : this.estimate(jx, jy)), nd, ns);
 				}
 			}
 		}

@@ -1,10 +1,10 @@
 /**
- * Whether a segment plate routed before the common plate still stands once the common plate is
- * laid: it does when none of its leads lies over a common-plate lead of a common it would light a
- * ghost with, where there is fluid. Laying the common plate only raises costs, so where no lead
- * meets a raised cell every lead is still a least-cost path in the same order, and routing the
- * plate again would give an equally good drawing. Seen on the segment router's own grid (same
- * domain, pitch and cost field), so this says exactly what a second routing would see.
+ * Which nets of a segment plate routed before the common plate no longer stand once the common
+ * plate is laid: those with a lead over a common-plate lead of a common it would light a ghost
+ * with, where there is fluid. Laying the common plate only raises costs, so a lead that meets no
+ * raised cell is still a least-cost path, and only the nets that do are worth routing again. Seen
+ * on the segment router's own grid (same domain, pitch and cost field), so this says exactly what
+ * a second routing would see.
  */
 import type { Trace } from '../design/glass-art-schema';
 import type { Design } from '../design/schema';
@@ -21,9 +21,10 @@ export function leadsCrossBuses(options: {
 	buses: readonly Trace[];
 	/** Indexes of the commons a lead of this net lights a ghost over. */
 	litOf: (net: string) => readonly number[];
-}): boolean {
+}): Set<string> {
 	const { design, layout, leads, buses, litOf } = options;
-	if (buses.length === 0 || leads.length === 0) return false;
+	const crossing = new Set<string>();
+	if (buses.length === 0 || leads.length === 0) return crossing;
 	const width = design.glassArt.traceWidth_mm;
 	const grid = new RouteGrid({
 		domain: segmentDomain(layout),
@@ -39,16 +40,14 @@ export function leadsCrossBuses(options: {
 		grid,
 		conductors: conductors.filter((c) => c.common >= 0)
 	});
-	const base = costs([]).cost;
+	const base = costs([]);
 	for (const lead of leads) {
-		const lit = costs(litOf(lead.net)).cost;
-		if (lit === base) continue;
-		let raised = false;
+		const lit = costs(litOf(lead.net));
+		if (lit === base || crossing.has(lead.net)) continue;
 		for (const ring of traceRings(lead))
 			grid.forCellsNear(ring, 0, (cell) => {
-				if (lit[cell] > base[cell]) raised = true;
+				if (lit[cell] > base[cell]) crossing.add(lead.net);
 			});
-		if (raised) return true;
 	}
-	return false;
+	return crossing;
 }

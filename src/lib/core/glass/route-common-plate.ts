@@ -65,6 +65,8 @@ export function routeCommonPlate(options: {
 	const dots = new Map(transferPoints(design, layout).map((t) => [t.common, dotRing(t)]));
 	pieces.forEach((p) => grid.claim(p.grown[0], commons.indexOf(p.common), clearance));
 	for (const [common, ring] of dots) grid.claim(ring, commons.indexOf(common), clearance);
+	// Each common's home: the clearance around its own pieces and transfer point.
+	const home = Int32Array.from(grid.owner);
 	const costs = ghostCosts({
 		design,
 		layout,
@@ -86,14 +88,14 @@ export function routeCommonPlate(options: {
 			net,
 			terminals,
 			width_mm: width,
-			clearance_mm: clearance
+			clearance_mm: clearance,
+			home
 		});
 		return [{ common, net, steps, route: null as NetRoute | null }];
 	});
 	// Each common's own costs apply while it grows: its leads avoid the segment leads it would light.
 	const advance = (g: (typeof growing)[number]) => {
-		const { cost, key } = costs([g.net]);
-		grid.setCost(cost, key);
+		grid.setCost(costs([g.net]));
 		const step = g.steps.next();
 		if (step.done) g.route = step.value;
 	};

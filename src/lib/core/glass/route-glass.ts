@@ -2,9 +2,10 @@
  * Automatic routing of both plates, in three passes: the segment plate over the bare back-plate
  * pieces (where the leads want to go), then the common plate keeping its leads from under those
  * segment leads where they would light a ghost, then the segment plate again over the finished
- * common plate, starting from the net order that worked on the first pass — unless no first-pass
- * lead lies over a common-plate lead it would light, in which case the first pass stands.
+ * common plate, starting from the net order that worked on the first pass: only the nets with a
+ * first-pass lead over a common-plate lead it would light are routed again, around the others.
  */
+import type { Trace } from '../design/glass-art-schema';
 import type { Design } from '../design/schema';
 import { platePieces } from './back-plate-pieces';
 import { glassLayout } from './layout';
@@ -47,7 +48,7 @@ export function routeGlass(design: Design): GlassRouting {
 		const result = routeCommonPlate({ design, layout, pieces, order, front });
 		if (!common || result.missed < common.missed) common = result;
 		// The second order helps when a few pieces are walled in; a crowded plate stays crowded.
-		if (result.missed === 0 || result.missed > Math.max(2, pieces.length / 10)) break;
+		if (result.missed === 0) break;
 	}
 	const commonConductors = [
 		...bare,
@@ -55,16 +56,24 @@ export function routeGlass(design: Design): GlassRouting {
 			traceRings(t).map((ring) => ({ common: commons.indexOf(t.net), ring }))
 		)
 	].filter((c) => c.common >= 0);
-	const stands = !leadsCrossBuses({
+	const crossing = leadsCrossBuses({
 		design,
 		layout,
 		leads: first.traces,
 		buses: common!.traces,
 		litOf: (net) => lines.get(net) ?? all
 	});
-	const segment = stands
-		? first
-		: routeSegmentPlate({ design, layout, commonConductors, start: first.order });
+	const again = (kept: Trace[]) =>
+		routeSegmentPlate({ design, layout, commonConductors, start: first.order, kept });
+	let segment = first;
+	if (crossing.size > 0) {
+		// Only the nets whose leads cross a bus they light are routed again, around the rest; if
+		// that reaches fewer terminals than the first pass did, the whole plate is routed again.
+		// Nets left short on the first pass are routed again too.
+		for (const u of first.unrouted) crossing.add(u.net);
+		segment = again(first.traces.filter((t) => !crossing.has(t.net)));
+		if (segment.missed > first.missed) segment = again([]);
+	}
 	return {
 		traces: [...common!.traces, ...segment.traces],
 		unrouted: [...common!.unrouted, ...segment.unrouted]

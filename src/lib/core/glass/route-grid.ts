@@ -40,11 +40,13 @@ export class RouteGrid {
 	readonly ny: number;
 	readonly owner: Int32Array;
 	/**
-	 * Extra cost of entering each cell. Searches read it once per `costVersion` (which `addCost`
-	 * advances): write it directly only before the first search.
+	 * Extra cost of entering each cell, in the searches' cost units (a step costs STEP_COST). Its
+	 * own array to write into, or one the router shares between grids and nets (`setCost`).
 	 */
-	readonly cost: Float32Array;
-	costVersion = 0;
+	get cost(): Float32Array {
+		return this.costs;
+	}
+	private costs: Float32Array;
 
 	constructor(options: { domain: Rect; cell_mm: number }) {
 		const { domain, cell_mm } = options;
@@ -56,7 +58,7 @@ export class RouteGrid {
 		if (this.nx * this.ny > 8_000_000)
 			throw new RangeError('the glass is too large for the routing grid at this trace pitch');
 		this.owner = new Int32Array(this.nx * this.ny).fill(FREE);
-		this.cost = new Float32Array(this.nx * this.ny);
+		this.costs = new Float32Array(this.nx * this.ny);
 	}
 
 	readonly cell_mm: number;
@@ -126,21 +128,11 @@ export class RouteGrid {
 		});
 	}
 
-	/**
-	 * Replaces the whole cost field. `key` names these values for the searches' cached estimates:
-	 * the same key must always come with the same values, and differ from any `addCost` version.
-	 */
-	setCost(values: Float32Array, key: number): void {
-		this.cost.set(values);
-		this.costVersion = key;
-	}
-
-	/** Adds `extra` to the cost of every cell whose centre lies inside the ring (or within reach). */
-	addCost(ring: Float64Array, extra: number, reach_mm = 0): void {
-		this.costVersion = Math.max(0, this.costVersion) + 1;
-		this.forCellsNear(ring, reach_mm, (cell) => {
-			this.cost[cell] += extra;
-		});
+	/** Takes `values` as the cost field (not copied: the caller must not change it while in use). */
+	setCost(values: Float32Array): void {
+		if (values.length !== this.nx * this.ny)
+			throw new RangeError('cost field size differs from the routing grid');
+		this.costs = values;
 	}
 
 	/** Cells whose centre lies inside the ring; the nearest cell when none does (a small ring). */

@@ -87,6 +87,8 @@ export interface NetOptions {
 	terminals: readonly Terminal[];
 	width_mm: number;
 	clearance_mm: number;
+	/** Per cell the net whose home it is (see GridSearch.search). */
+	home?: Int32Array;
 }
 
 /** Routes the whole net at once. */
@@ -103,7 +105,7 @@ export function routeNet(options: NetOptions): NetRoute {
  * nets can grow in turn and none spreads over the plate before the others have their first leads.
  */
 export function* growNet(options: NetOptions): Generator<void, NetRoute> {
-	const { grid, search, net, terminals, width_mm, clearance_mm } = options;
+	const { grid, search, net, terminals, width_mm, clearance_mm, home } = options;
 	const leads: XY[][] = [];
 	const unreached: Terminal[] = [];
 	if (terminals.length === 0) return { leads, unreached };
@@ -168,7 +170,8 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 				target: targets,
 				targetCells,
 				net,
-				boxes: [...pending].map((p) => boxes[p])
+				boxes: [...pending].map((p) => boxes[p]),
+				home
 			});
 			for (const c of targetCells) targets[c] = 0;
 			if (!cells) {
@@ -191,7 +194,8 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 			target: inTree,
 			targetCells: treeCells,
 			net,
-			boxes: [boxes[nearest[next].to]]
+			boxes: [boxes[nearest[next].to]],
+			home
 		});
 		if (!cells) {
 			// The net's passable cells only shrink as leads are laid, so every terminal in the region

@@ -18,6 +18,7 @@ import type { PlateRouting, Unrouted } from './plate-routing';
 import { rectRing } from './rings';
 import { RouteGrid } from './route-grid';
 import { routeNet, type Terminal } from './route-net';
+import { traceRings } from './trace-rings';
 import { dotRing, transferPoints } from './transfer-points';
 
 /** Routing attempts at most (the first plus retries with failed nets first). */
@@ -87,28 +88,40 @@ function routeSegmentAttempt(options: {
 	layout: GlassLayout;
 	nets: readonly SegmentNet[];
 	commonConductors: readonly { common: number; ring: Float64Array }[];
+	kept: readonly Trace[];
 }): PlateRouting {
-	const { design, layout, nets, commonConductors } = options;
+	const { design, layout, nets, commonConductors, kept } = options;
 	const width = design.glassArt.traceWidth_mm;
 	const gap = design.rules.minGap_mm;
 	const clearance = gap + width / 2;
 	const grid = new RouteGrid({ domain: segmentDomain(layout), cell_mm: width + gap });
 	const search = new GridSearch(grid);
 	nets.forEach((n, k) => n.terminals.forEach((t) => grid.claim(t.ring, k, clearance)));
+	// Each net's home: the clearance around its own terminals, before any lead is laid.
+	const home = Int32Array.from(grid.owner);
 	const costOf = ghostCosts({ design, layout, grid, conductors: commonConductors });
 	const traces: Trace[] = [];
 	const unrouted: Unrouted[] = [];
+	const keptNets = new Set(kept.map((t) => t.net));
+	nets.forEach(({ pad }, net) => {
+		if (!keptNets.has(pad.net)) return;
+		for (const t of kept.filter((k) => k.net === pad.net)) {
+			traces.push(t);
+			for (const ring of traceRings(t)) grid.claim(ring, net, clearance);
+		}
+	});
 	let missed = 0;
 	nets.forEach(({ pad, terminals, lit }, net) => {
-		const { cost, key } = costOf(lit);
-		grid.setCost(cost, key);
+		if (keptNets.has(pad.net)) return;
+		grid.setCost(costOf(lit));
 		const route = routeNet({
 			grid,
 			search,
 			net,
 			terminals,
 			width_mm: width,
-			clearance_mm: clearance
+			clearance_mm: clearance,
+			home
 		});
 		route.leads.forEach((points, i) =>
 			traces.push({
@@ -136,6 +149,8 @@ export function routeSegmentPlate(options: {
 	commonConductors: readonly { common: number; ring: Float64Array }[];
 	/** Net order to start from (pad nets), e.g. the order that worked on an earlier pass. */
 	start?: readonly string[];
+	/** Leads laid already, kept as they are: their nets are not routed again. */
+	kept?: readonly Trace[];
 }): PlateRouting & { order: string[] } {
 	let nets = segmentNets(options.design, options.layout);
 	if (options.start) {
@@ -146,7 +161,7 @@ export function routeSegmentPlate(options: {
 	}
 	let best: (PlateRouting & { order: string[] }) | null = null;
 	for (let attempt = 0; attempt < SEGMENT_ATTEMPTS; attempt++) {
-		const result = routeSegmentAttempt({ ...options, nets });
+		const result = routeSegmentAttempt({ ...options, nets, kept: options.kept ?? [] });
 		if (!best || result.missed < best.missed)
 			best = { ...result, order: nets.map((n) => n.pad.net) };
 		const failed = new Set(result.unrouted.map((u) => u.net));
