@@ -38,7 +38,6 @@ const DX = Int32Array.of(1, -1, 0, 0);
 const DY = Int32Array.of(0, 0, 1, -1);
 /** Local copy: a module-level constant reads cheaper in the hot loops than an imported binding. */
 const FREE_CELL: number = FREE;
-const EMPTY = new Int32Array(0);
 
 /** Least-cost searches on one routing grid. */
 export class GridSearch {
