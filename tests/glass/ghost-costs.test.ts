@@ -23,7 +23,7 @@ describe('ghost costs', () => {
 		(ring) => ({ common: 1, ring })
 	);
 	const costs = ghostCosts({ design, layout, grid, conductors });
-	const costOf = (lit: number[]) => costs(lit);
+	const costOf = (lit: number[]) => costs.of(lit);
 	const at = (cost: Float32Array, x: number, y: number) =>
 		cost[Math.floor(y / 0.1) * grid.nx + Math.floor(x / 0.1)];
 

@@ -7,7 +7,7 @@
  * to the border where they can.
  */
 import type { Design } from '../design/schema';
-import { crossingZones, ZONE_BEZEL, ZONE_VIEW } from './crossing-zones';
+import { cellZone, viewingColumns, ZONE_DRY, ZONE_VIEW } from './crossing-zones';
 import type { GlassLayout } from './layout';
 import type { RouteGrid } from './route-grid';
 
@@ -18,46 +18,97 @@ const GHOST_COST_VIEW = 1600;
 /** The same behind the bezel, where a ghost switches but is hidden. */
 const GHOST_COST_BEZEL = 600;
 
+/** Per common the cells over its conductors where a lead lighting it pays extra, and how much. */
+export interface GhostLayer {
+	cells: Int32Array;
+	extra: Float32Array;
+}
+
 /**
- * Cost grids for leads on one plate over the other plate's conductors: the viewing-area cost
+ * The ghost cost of each cell over each common's conductors (within half a trace width of them):
+ * GHOST_COST_VIEW in the viewing area, GHOST_COST_BEZEL behind the bezel, none where dry. Each
+ * cell once per common; a conductor covers few cells of a plate, so these are lists, not grids.
+ */
+export function ghostLayers(options: {
+	design: Design;
+	layout: GlassLayout;
+	grid: RouteGrid;
+	conductors: readonly { common: number; ring: Float64Array }[];
+}): GhostLayer[] {
+	const { design, layout, grid, conductors } = options;
+	const reach = design.glassArt.traceWidth_mm / 2;
+	const zoneOf = cellZone(grid, { viewing: design.glass.viewingArea, sealInner: layout.sealInner });
+	return design.commons.map((_, common) => {
+		const found: number[] = [];
+		for (const c of conductors)
+			if (c.common === common) grid.forCellsNear(c.ring, reach, (cell) => void found.push(cell));
+		const sorted = Int32Array.from(found).sort();
+		const cells: number[] = [];
+		const extra: number[] = [];
+		for (let k = 0; k < sorted.length; k++) {
+			const cell = sorted[k];
+			if (k > 0 && sorted[k - 1] === cell) continue;
+			const zone = zoneOf(cell);
+			if (zone === ZONE_DRY) continue;
+			cells.push(cell);
+			extra.push(zone === ZONE_VIEW ? GHOST_COST_VIEW : GHOST_COST_BEZEL);
+		}
+		return { cells: Int32Array.from(cells), extra: Float32Array.from(extra) };
+	});
+}
+
+/** Cost fields handed back by finished plates, kept for the next (one size at a time). */
+const spareFields: Float32Array[] = [];
+const SPARE_FIELDS = 12;
+
+export interface GhostCosts {
+	/** The cost field of a lead that lights these commons (shared between callers: read only). */
+	of(lit: readonly number[]): Float32Array;
+	/** Hands the fields back for reuse; the caller must not read them afterwards. */
+	release(): void;
+}
+
+/**
+ * Cost fields for leads on one plate over the other plate's conductors: the viewing-area cost
  * everywhere in it, plus, for each set of commons a lead would light a ghost with, the ghost cost
- * over those commons' conductors (heavy in the viewing area, light behind the bezel, none where
- * there is no fluid). One grid per set of commons, made on first use.
+ * over those commons' conductors. One field per set of commons, made on first use.
  */
 export function ghostCosts(options: {
 	design: Design;
 	layout: GlassLayout;
 	grid: RouteGrid;
 	conductors: readonly { common: number; ring: Float64Array }[];
-}): (lit: readonly number[]) => Float32Array {
-	const { design, layout, grid, conductors } = options;
-	const reach = design.glassArt.traceWidth_mm / 2;
-	const zones = crossingZones(grid, {
-		viewing: design.glass.viewingArea,
-		sealInner: layout.sealInner
-	});
+}): GhostCosts {
+	const { design, grid } = options;
+	const layers = ghostLayers(options);
 	const n = grid.nx * grid.ny;
-	const layers = design.commons.map(() => new Float32Array(n));
-	for (const { common, ring } of conductors)
-		grid.forCellsNear(ring, reach, (cell) => {
-			const zone = zones[cell];
-			layers[common][cell] =
-				zone === ZONE_VIEW ? GHOST_COST_VIEW : zone === ZONE_BEZEL ? GHOST_COST_BEZEL : 0;
-		});
-	const base = new Float32Array(n);
-	for (let cell = 0; cell < n; cell++) if (zones[cell] === ZONE_VIEW) base[cell] = VIEW_COST;
+	const viewRow = viewingColumns(grid, design.glass.viewingArea);
 	const made = new Map<string, Float32Array>();
-	return (lit) => {
-		const name = lit.join(',');
-		let cost = made.get(name);
-		if (!cost) {
-			cost = Float32Array.from(base);
+	return {
+		of(lit) {
+			const name = lit.join(',');
+			let cost = made.get(name);
+			if (cost) return cost;
+			const spare = spareFields.findIndex((f) => f.length === n);
+			cost = spare >= 0 ? spareFields.splice(spare, 1)[0].fill(0) : new Float32Array(n);
+			for (let iy = 0; iy < grid.ny; iy++) {
+				const [first, last] = viewRow(iy);
+				if (first <= last) cost.fill(VIEW_COST, iy * grid.nx + first, iy * grid.nx + last + 1);
+			}
 			for (const c of lit) {
 				const layer = layers[c];
-				for (let cell = 0; cell < n; cell++) cost[cell] += layer[cell];
+				if (!layer) continue;
+				for (let k = 0; k < layer.cells.length; k++) cost[layer.cells[k]] += layer.extra[k];
 			}
 			made.set(name, cost);
+			return cost;
+		},
+		release() {
+			for (const field of made.values()) {
+				if (spareFields.length === SPARE_FIELDS) spareFields.shift();
+				spareFields.push(field);
+			}
+			made.clear();
 		}
-		return cost;
 	};
 }

@@ -8,7 +8,7 @@
  */
 import type { Trace } from '../design/glass-art-schema';
 import type { Design } from '../design/schema';
-import { ghostCosts } from './ghost-costs';
+import { ghostLayers } from './ghost-costs';
 import type { GlassLayout } from './layout';
 import { RouteGrid } from './route-grid';
 import { segmentDomain } from './route-segment-plate';
@@ -34,19 +34,27 @@ export function leadsCrossBuses(options: {
 	const conductors = buses.flatMap((t) =>
 		traceRings(t).map((ring) => ({ common: commons.indexOf(t.net), ring }))
 	);
-	const costs = ghostCosts({
+	const layers = ghostLayers({
 		design,
 		layout,
 		grid,
 		conductors: conductors.filter((c) => c.common >= 0)
 	});
-	const base = costs([]);
+	// Per cell the commons a lead there would pay a ghost cost over.
+	const over = new Map<number, number[]>();
+	layers.forEach((layer, common) => {
+		for (const cell of layer.cells) {
+			const list = over.get(cell);
+			if (list) list.push(common);
+			else over.set(cell, [common]);
+		}
+	});
 	for (const lead of leads) {
-		const lit = costs(litOf(lead.net));
-		if (lit === base || crossing.has(lead.net)) continue;
+		if (crossing.has(lead.net)) continue;
+		const lit = litOf(lead.net);
 		for (const ring of traceRings(lead))
 			grid.forCellsNear(ring, 0, (cell) => {
-				if (lit[cell] > base[cell]) crossing.add(lead.net);
+				if (over.get(cell)?.some((c) => lit.includes(c))) crossing.add(lead.net);
 			});
 	}
 	return crossing;

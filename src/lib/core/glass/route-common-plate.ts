@@ -1,10 +1,10 @@
 /**
  * Routes the common plate: for each common its grown back-plate pieces and its transfer point are
  * joined inside the seal's outer edge by a growing tree per common (route-net). Two orders are
- * offered: all commons growing in turn, one join each (none walls in the others first), and the
- * commons one after another from the outside of the glass inwards (the banded layout of
- * multiplexed glass, where the outer commons' buses run along the edges and the inner ones cross
- * between the digits). Each common's leads avoid the segment leads they would light.
+ * offered: the commons one after another from the outside of the glass inwards (the banded layout
+ * of multiplexed glass, where the outer commons' buses run along the edges and the inner ones
+ * cross between the digits), and all commons growing in turn, one join each (none walls in the
+ * others first). Each common's leads avoid the segment leads they would light.
  *
  * Grid pitch = trace width + minimum gap; clearance = minimum gap + half the trace width.
  */
@@ -95,7 +95,7 @@ export function routeCommonPlate(options: {
 	});
 	// Each common's own costs apply while it grows: its leads avoid the segment leads it would light.
 	const advance = (g: (typeof growing)[number]) => {
-		grid.setCost(costs([g.net]));
+		grid.setCost(costs.of([g.net]));
 		const step = g.steps.next();
 		if (step.done) g.route = step.value;
 	};
@@ -125,5 +125,6 @@ export function routeCommonPlate(options: {
 				electrodes: route!.unreached.flatMap((t) => [...t.electrodes])
 			});
 	}
+	costs.release();
 	return { traces, unrouted, missed };
 }

@@ -1,7 +1,8 @@
 /**
  * Automatic routing of both plates, in three passes: the segment plate over the bare back-plate
  * pieces (where the leads want to go), then the common plate keeping its leads from under those
- * segment leads where they would light a ghost, then the segment plate again over the finished
+ * segment leads where they would light a ghost (the commons from the outside in, and, if that
+ * leaves pieces unjoined, all growing in turn), then the segment plate again over the finished
  * common plate, starting from the net order that worked on the first pass: only the nets with a
  * first-pass lead over a common-plate lead it would light are routed again, around the others.
  */
@@ -44,10 +45,10 @@ export function routeGlass(design: Design): GlassRouting {
 		traceRings(t).map((ring) => ({ lit: lines.get(t.net) ?? all, ring }))
 	);
 	let common: PlateRouting | null = null;
-	for (const order of [null, outsideInOrder(design, pieces)]) {
+	for (const order of [outsideInOrder(design, pieces), null]) {
 		const result = routeCommonPlate({ design, layout, pieces, order, front });
 		if (!common || result.missed < common.missed) common = result;
-		// The second order helps when a few pieces are walled in; a crowded plate stays crowded.
+		// The other order helps when a common's pieces or transfer point end up walled in.
 		if (result.missed === 0) break;
 	}
 	const commonConductors = [

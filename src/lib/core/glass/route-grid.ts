@@ -38,15 +38,19 @@ export class RouteGrid {
 	readonly y0: number;
 	readonly nx: number;
 	readonly ny: number;
-	readonly owner: Int32Array;
+	/** Owner of each cell (FREE, BLOCKED or a net), made on first use. */
+	get owner(): Int32Array {
+		return (this.owners ??= new Int32Array(this.nx * this.ny).fill(FREE));
+	}
+	private owners: Int32Array | null = null;
 	/**
 	 * Extra cost of entering each cell, in the searches' cost units (a step costs STEP_COST). Its
 	 * own array to write into, or one the router shares between grids and nets (`setCost`).
 	 */
 	get cost(): Float32Array {
-		return this.costs;
+		return (this.costs ??= new Float32Array(this.nx * this.ny));
 	}
-	private costs: Float32Array;
+	private costs: Float32Array | null = null;
 
 	constructor(options: { domain: Rect; cell_mm: number }) {
 		const { domain, cell_mm } = options;
@@ -57,8 +61,6 @@ export class RouteGrid {
 		this.ny = Math.max(1, Math.floor(domain.height_mm / cell_mm));
 		if (this.nx * this.ny > 8_000_000)
 			throw new RangeError('the glass is too large for the routing grid at this trace pitch');
-		this.owner = new Int32Array(this.nx * this.ny).fill(FREE);
-		this.costs = new Float32Array(this.nx * this.ny);
 	}
 
 	readonly cell_mm: number;

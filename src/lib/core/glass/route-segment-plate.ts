@@ -113,7 +113,7 @@ function routeSegmentAttempt(options: {
 	let missed = 0;
 	nets.forEach(({ pad, terminals, lit }, net) => {
 		if (keptNets.has(pad.net)) return;
-		grid.setCost(costOf(lit));
+		grid.setCost(costOf.of(lit));
 		const route = routeNet({
 			grid,
 			search,
@@ -140,6 +140,7 @@ function routeSegmentAttempt(options: {
 				electrodes: route.unreached.flatMap((t) => [...t.electrodes])
 			});
 	});
+	costOf.release();
 	return { traces, unrouted, missed };
 }
 
