@@ -34,6 +34,8 @@ export const BEND_COST = 16;
 const COSTED_POPS = 60_000;
 /** Cells the fill before a search may sweep before it leaves the question to the search. */
 const QUICK_FILL_CELLS = 4096;
+/** Seeds pack (estimate, source index) in one number: the index below this, the estimate above. */
+const SEED_SCALE = 2 ** 24;
 const DX = Int32Array.of(1, -1, 0, 0);
 const DY = Int32Array.of(0, 0, 1, -1);
 /** Local copy: a module-level constant reads cheaper in the hot loops than an imported binding. */
@@ -235,20 +237,39 @@ export class GridSearch {
 		this.setBoxes(options.boxes);
 		const epoch = this.scratch.nextEpoch();
 		heap.clear();
-		for (const cell of sources) {
-			const ix = cell % nx;
+		// Sources in order of their estimate, each let in only once the search's lowest priority
+		// reaches it: a large tree seeds a short join with the few cells near its target. A source
+		// has no heading (its first step never pays a bend), so one state of it goes in, heading 0.
+		const seeds = this.scratch.seedsFor(sources.length);
+		let seedCount = 0;
+		for (let k = 0; k < sources.length; k++) {
+			const cell = sources[k];
 			if (field && stepsMark[cell] !== field) continue;
+			const ix = cell % nx;
 			const f = field ? steps[cell] * STEP_COST : this.estimate(ix, (cell - ix) / nx);
-			for (let h = 0; h < 4; h++) {
-				const s = cell * 4 + h;
-				stamp[s] = epoch;
-				dist[s] = 0;
-				prev[s] = -1;
+			seeds[seedCount++] = f * SEED_SCALE + k;
+		}
+		const seeded = seeds.subarray(0, seedCount).sort();
+		let nextSeed = 0;
+		let budget = options.maxPops;
+		for (;;) {
+			while (
+				nextSeed < seedCount &&
+				(heap.size === 0 || Math.floor(seeded[nextSeed] / SEED_SCALE) <= heap.peekF())
+			) {
+				const key = seeded[nextSeed++];
+				const f = Math.floor(key / SEED_SCALE);
+				const s = sources[key - f * SEED_SCALE] * 4;
+				if (stamp[s] === epoch && dist[s] <= 0 && prev[s] === -1) continue;
+				// Every heading of the cell is a start (a walk back into it is never a way on).
+				for (let h = 0; h < 4; h++) {
+					stamp[s + h] = epoch;
+					dist[s + h] = 0;
+					prev[s + h] = -1;
+				}
 				heap.push(f, 0, s);
 			}
-		}
-		let budget = options.maxPops;
-		while (heap.size > 0) {
+			if (heap.size === 0) break;
 			if (budget-- <= 0) return null;
 			this.pops++;
 			const state = heap.pop();

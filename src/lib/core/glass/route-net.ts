@@ -74,6 +74,19 @@ function giveMask(mask: Uint8Array): void {
 	spareMasks.push(mask);
 }
 
+/** The same for per-cell terminal indexes (0 = none, else terminal + 1). */
+const spareIndexes: Int32Array[] = [];
+
+function takeIndex(cells: number): Int32Array {
+	const i = spareIndexes.findIndex((m) => m.length === cells);
+	return i >= 0 ? spareIndexes.splice(i, 1)[0] : new Int32Array(cells);
+}
+
+function giveIndex(index: Int32Array): void {
+	if (spareIndexes.length === SPARE_MASKS) spareIndexes.shift();
+	spareIndexes.push(index);
+}
+
 /** Up to this many pending terminals, one search from the tree looks for all of them at once. */
 const FEW_TERMINALS = 8;
 
@@ -112,25 +125,41 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	const inTree = takeMask(grid.nx * grid.ny);
 	let targets: Uint8Array | null = null;
 	const treeCells: number[] = [];
-	const terminalAt = new Map<number, number[]>();
+	// Which terminal each cell belongs to: one per cell in a shared index, any further ones (where
+	// terminals overlap) in a map beside it.
+	const firstAt = takeIndex(grid.nx * grid.ny);
+	const moreAt = new Map<number, number[]>();
 	const cellsOf = terminals.map((t) => grid.cellsInside(t.ring));
-	cellsOf.forEach((cells, t) =>
-		cells.forEach((c) => {
-			const list = terminalAt.get(c);
-			if (list) list.push(t);
-			else terminalAt.set(c, [t]);
-		})
-	);
+	cellsOf.forEach((cells, t) => {
+		for (const c of cells) {
+			if (firstAt[c] === 0) firstAt[c] = t + 1;
+			else if (firstAt[c] !== t + 1) {
+				const list = moreAt.get(c);
+				if (list) list.push(t);
+				else moreAt.set(c, [t]);
+			}
+		}
+	});
+	/** Calls `visit` for each terminal at the cell. */
+	const terminalsAt = (c: number, visit: (t: number) => void) => {
+		if (firstAt[c] === 0) return;
+		visit(firstAt[c] - 1);
+		const more = moreAt.get(c);
+		if (more) for (const t of more) visit(t);
+	};
 	const boxes = cellsOf.map((cells) => cellBox(grid, cells));
 	const pending = new Set<number>();
 	const nearest = terminals.map(() => ({ gap: Infinity, to: 0 }));
 	const touched: number[] = [];
+	const touch = (t: number) => {
+		if (pending.has(t)) touched.push(t);
+	};
 	const join = (cells: readonly number[]) => {
 		for (const c of cells) {
 			if (inTree[c]) continue;
 			inTree[c] = 1;
 			treeCells.push(c);
-			for (const t of terminalAt.get(c) ?? []) if (pending.has(t)) touched.push(t);
+			terminalsAt(c, touch);
 		}
 	};
 	const reach = (t: number) => {
@@ -181,8 +210,10 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 				continue;
 			}
 			layLead(cells);
-			const end = cells[cells.length - 1];
-			const hit = (terminalAt.get(end) ?? []).find((p) => pending.has(p));
+			let hit: number | undefined;
+			terminalsAt(cells[cells.length - 1], (p) => {
+				if (hit === undefined && pending.has(p)) hit = p;
+			});
 			if (hit !== undefined) reach(hit);
 			yield;
 			continue;
@@ -215,5 +246,7 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	for (const c of treeCells) inTree[c] = 0;
 	giveMask(inTree);
 	if (targets) giveMask(targets);
+	for (const cells of cellsOf) for (const c of cells) firstAt[c] = 0;
+	giveIndex(firstAt);
 	return { leads, unreached };
 }

@@ -47,6 +47,14 @@ export class SearchScratch {
 		this.stepsMark = new Uint32Array(cells);
 	}
 
+	/** Room for `count` packed search seeds. */
+	seedsFor(count: number): Float64Array {
+		if (this.seeds.length < count)
+			this.seeds = new Float64Array(Math.max(count, 2 * this.seeds.length));
+		return this.seeds;
+	}
+	private seeds = new Float64Array(1024);
+
 	/** A mark no cell of the step field carries yet. */
 	nextFieldMark(): number {
 		if (this.fieldEpoch === 0xffffffff) {

@@ -23,14 +23,18 @@ export class StateQueue {
 	private state = new Int32Array(1024);
 	private used = 0;
 	private count = 0;
-	/** Lowest priority that may still hold entries; the highest pushed. */
+	/** Lowest priority that may still hold entries; the highest pushed (-1: none yet). */
 	private low = 0;
-	private high = -Infinity;
+	private high = -1;
 	/** Priority of the last entry popped: nothing lower may come in while in bucket mode. */
 	private floor = 0;
 	private heapMode = false;
 	private readonly heap = new StateHeap();
-	private lastG = 0;
+	/**
+	 * Cost so far of the last entry popped, in a typed slot: a number field that holds whole and
+	 * fractional values in turn would box each one on the heap, once per pop.
+	 */
+	private readonly lastG = new Float64Array(1);
 
 	get size(): number {
 		return this.heapMode ? this.heap.size : this.count;
@@ -40,7 +44,7 @@ export class StateQueue {
 		if (this.count > 0) this.head.fill(-1);
 		this.used = 0;
 		this.count = 0;
-		this.high = -Infinity;
+		this.high = -1;
 		this.floor = 0;
 		this.heapMode = false;
 		this.heap.clear();
@@ -71,10 +75,22 @@ export class StateQueue {
 		this.count++;
 	}
 
+	/** The lowest priority waiting (Infinity when empty). */
+	peekF(): number {
+		if (this.heapMode) return this.heap.size > 0 ? this.heap.topF() : Infinity;
+		if (this.count === 0) return Infinity;
+		const head = this.head,
+			mask = this.mask;
+		let f = this.low;
+		while (head[f & mask] < 0) f++;
+		this.low = f;
+		return f;
+	}
+
 	/** Removes an entry of the lowest priority and returns its state; `poppedG` is its cost so far. */
 	pop(): number {
 		if (this.heapMode) {
-			this.lastG = this.heap.topG();
+			this.lastG[0] = this.heap.topG();
 			return this.heap.pop();
 		}
 		const head = this.head,
@@ -86,13 +102,13 @@ export class StateQueue {
 		const e = head[f & mask];
 		head[f & mask] = this.next[e];
 		this.count--;
-		this.lastG = this.g[e];
+		this.lastG[0] = this.g[e];
 		return this.state[e];
 	}
 
 	/** Cost so far of the entry the last `pop()` returned. */
 	get poppedG(): number {
-		return this.lastG;
+		return this.lastG[0];
 	}
 
 	private growPool(): void {
