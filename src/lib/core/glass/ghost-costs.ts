@@ -38,22 +38,33 @@ export function ghostLayers(options: {
 	const { design, layout, grid, conductors } = options;
 	const reach = design.glassArt.traceWidth_mm / 2;
 	const zoneOf = cellZone(grid, { viewing: design.glass.viewingArea, sealInner: layout.sealInner });
-	return design.commons.map((_, common) => {
-		const found: number[] = [];
-		for (const c of conductors)
-			if (c.common === common) grid.forCellsNear(c.ring, reach, (cell) => void found.push(cell));
-		const sorted = Int32Array.from(found).sort();
-		const cells: number[] = [];
-		const extra: number[] = [];
-		for (let k = 0; k < sorted.length; k++) {
+	const byCommon = design.commons.map(() => [] as Float64Array[]);
+	for (const c of conductors) byCommon[c.common]?.push(c.ring);
+	let found = new Int32Array(1024);
+	return byCommon.map((rings) => {
+		let count = 0;
+		for (const ring of rings)
+			grid.forCellsNear(ring, reach, (cell) => {
+				if (count === found.length) {
+					const grown = new Int32Array(2 * found.length);
+					grown.set(found);
+					found = grown;
+				}
+				found[count++] = cell;
+			});
+		const sorted = found.subarray(0, count).sort();
+		const cells = new Int32Array(count);
+		const extra = new Float32Array(count);
+		let kept = 0;
+		for (let k = 0; k < count; k++) {
 			const cell = sorted[k];
 			if (k > 0 && sorted[k - 1] === cell) continue;
 			const zone = zoneOf(cell);
 			if (zone === ZONE_DRY) continue;
-			cells.push(cell);
-			extra.push(zone === ZONE_VIEW ? GHOST_COST_VIEW : GHOST_COST_BEZEL);
+			cells[kept] = cell;
+			extra[kept++] = zone === ZONE_VIEW ? GHOST_COST_VIEW : GHOST_COST_BEZEL;
 		}
-		return { cells: Int32Array.from(cells), extra: Float32Array.from(extra) };
+		return { cells: cells.slice(0, kept), extra: extra.slice(0, kept) };
 	});
 }
 

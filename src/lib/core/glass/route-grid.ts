@@ -130,6 +130,41 @@ export class RouteGrid {
 		});
 	}
 
+	/**
+	 * `claim` for an axis-aligned rectangle [x0, x1] × [y0, y1] (a straight run of a routed lead):
+	 * the same cells, each row's run worked out from the rectangle instead of measured cell by cell.
+	 */
+	claimBox(
+		x0: number,
+		y0: number,
+		x1: number,
+		y1: number,
+		net: number,
+		clearance_mm: number
+	): void {
+		const owner = this.owner;
+		const c = this.cell_mm;
+		const reach2 = clearance_mm * clearance_mm - 1e-12;
+		const iy0 = Math.max(0, Math.floor((y0 - clearance_mm - this.y0) / c));
+		const iy1 = Math.min(this.ny - 1, Math.ceil((y1 + clearance_mm - this.y0) / c));
+		const ix0 = Math.max(0, Math.floor((x0 - clearance_mm - this.x0) / c));
+		const ix1 = Math.min(this.nx - 1, Math.ceil((x1 + clearance_mm - this.x0) / c));
+		for (let iy = iy0; iy <= iy1; iy++) {
+			const y = this.centreY(iy);
+			const dy = y < y0 ? y0 - y : y > y1 ? y - y1 : 0;
+			if (dy * dy >= reach2) continue;
+			for (let ix = ix0; ix <= ix1; ix++) {
+				const x = this.centreX(ix);
+				const dx = x < x0 ? x0 - x : x > x1 ? x - x1 : 0;
+				if (dx * dx + dy * dy >= reach2) continue;
+				const cell = iy * this.nx + ix;
+				const o = owner[cell];
+				if (o === FREE) owner[cell] = net;
+				else if (o !== net) owner[cell] = BLOCKED;
+			}
+		}
+	}
+
 	/** Takes `values` as the cost field (not copied: the caller must not change it while in use). */
 	setCost(values: Float32Array): void {
 		if (values.length !== this.nx * this.ny)

@@ -173,8 +173,22 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	const layLead = (cells: readonly number[]) => {
 		const lead = cellsToPolyline(grid, cells);
 		leads.push(lead);
-		for (let i = 1; i < lead.length; i++)
-			grid.claim(leadRing({ a: lead[i - 1], b: lead[i], width_mm }), net, clearance_mm);
+		const half = width_mm / 2;
+		for (let i = 1; i < lead.length; i++) {
+			const a = lead[i - 1],
+				b = lead[i];
+			// Runs between cell centres are straight along x or y: their ring is a rectangle.
+			if (a.x === b.x || a.y === b.y)
+				grid.claimBox(
+					Math.min(a.x, b.x) - half,
+					Math.min(a.y, b.y) - half,
+					Math.max(a.x, b.x) + half,
+					Math.max(a.y, b.y) + half,
+					net,
+					clearance_mm
+				);
+			else grid.claim(leadRing({ a, b, width_mm }), net, clearance_mm);
+		}
 		join(cells);
 	};
 	for (let t = 1; t < terminals.length; t++) pending.add(t);
