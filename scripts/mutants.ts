@@ -253,8 +253,25 @@ export const MUTANTS: readonly Mutant[] = [
 		id: 'ghost costs: a crossing behind the bezel as dear as in view',
 		file: 'src/lib/core/glass/ghost-costs.ts',
 		edits: [
-			['zone === ZONE_BEZEL ? GHOST_COST_BEZEL : 0', 'zone === ZONE_BEZEL ? GHOST_COST_VIEW : 0']
+			[
+				'zone === ZONE_VIEW ? GHOST_COST_VIEW : GHOST_COST_BEZEL',
+				'zone === ZONE_VIEW ? GHOST_COST_VIEW : GHOST_COST_VIEW'
+			]
 		],
 		tests: ['tests/glass/ghost-costs.test.ts']
+	},
+	{
+		id: "routing: a lead pays the ghost cost over its own electrode's back plate",
+		file: 'src/lib/core/glass/grid-search.ts',
+		edits: [
+			['(home !== null && home[next] === net)', '(home !== null && home[next] === -net - 3)']
+		],
+		tests: ['tests/glass/grid-search.test.ts']
+	},
+	{
+		id: 'routing: a straight run claims cells out to the clearance along one axis only',
+		file: 'src/lib/core/glass/route-grid.ts',
+		edits: [['if (dx * dx + dy * dy >= reach2) continue;', 'if (dx * dx >= reach2) continue;']],
+		tests: ['tests/glass/grid-search.test.ts']
 	}
 ];
