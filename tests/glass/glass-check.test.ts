@@ -164,6 +164,43 @@ describe('ghosts, shorts and bad geometry', () => {
 			0.1
 		);
 		expect(codes(d)).toContain('glass.short');
+		// The hand lead touches E1 (it serves it) and runs into E2.
+		const short = checkGlass(d).findings.find((f) => f.code === 'glass.short');
+		expect(short?.electrodes.sort()).toEqual(['e1', 'e2']);
+	});
+
+	it('names the electrodes on a common whose transfer point has lost its lead to the pad', () => {
+		const d = twoElectrodes();
+		const routed = applyPatch(d, generateGlass(d));
+		const cut = {
+			...routed,
+			glassArt: {
+				...routed.glassArt,
+				traces: routed.glassArt.traces.filter((t) => !(t.plate === 'segment' && t.net === 'com1'))
+			}
+		};
+		const opens = checkGlass(cut).findings.filter((f) => f.code === 'glass.open');
+		// COM1's transfer point is cut off from its pad: E1 is the one electrode on COM1.
+		expect(opens.map((f) => f.electrodes)).toEqual([['e1']]);
+	});
+
+	it("names the electrodes of both leads when a lead runs into another line's lead", () => {
+		// From E1 down to y = 12 and across the glass below E2, where SEG2's lead comes down
+		// from E2 (15–20 mm) to its pad: the two leads touch, and each serves one electrode.
+		const d = withHandTrace(
+			[
+				{ x: 9.9, y: 6.5 },
+				{ x: 12, y: 6.5 },
+				{ x: 12, y: 12 },
+				{ x: 25, y: 12 }
+			],
+			0.1
+		);
+		const shorts = checkGlass(d).findings.filter(
+			(f) => f.code === 'glass.short' && f.message.includes('(SEG2)')
+		);
+		expect(shorts.length).toBeGreaterThan(0);
+		for (const f of shorts) expect(f.electrodes).toEqual(expect.arrayContaining(['e1', 'e2']));
 	});
 
 	it('names self-crossing, zero-area and off-glass electrodes', () => {

@@ -12,7 +12,8 @@ import {
 } from '../design/glass-art-schema';
 import type { Design } from '../design/schema';
 import { finding, type Finding } from '../findings/finding';
-import { buildArtwork, type GlassArtwork } from './artwork';
+import { buildArtwork, type Conductor, type GlassArtwork, type Net } from './artwork';
+import { leadElectrodes } from './lead-reach';
 import { plateConnectivity } from './connectivity';
 import { ghostCheck, type Ghost } from './ghost-check';
 import { ghostFindings } from './ghost-findings';
@@ -128,6 +129,17 @@ export function checkGlass(design: Design): GlassReport {
 		);
 	}
 	const gap = design.rules.minGap_mm;
+	// The electrodes a conductor concerns: its own; for a lead, those it serves; for a lead that
+	// serves none, a pad or a transfer point, every electrode on its common or line.
+	const served = leadElectrodes([...art.segment, ...art.common]);
+	const concerns = (conductor: Conductor, net: Net): string[] => {
+		if (conductor.electrodes.length > 0) return [...conductor.electrodes];
+		const reached = served.get(conductor) ?? [];
+		if (reached.length > 0) return reached;
+		return design.electrodes
+			.filter((e) => (net.kind === 'common' ? e.common === net.id : e.line === net.id))
+			.map((e) => e.id);
+	};
 	for (const [plate, nets, root] of [
 		['segment', art.segment, 'pad'],
 		['common', art.common, 'transfer']
@@ -140,7 +152,7 @@ export function checkGlass(design: Design): GlassReport {
 					severity: 'fail',
 					message: `${o.conductor.name} (${plate} plate, ${o.net.name}) has no path to its ${root === 'pad' ? 'pad' : 'transfer point'}.`,
 					fix: 'Generate the traces again, or draw a trace to it.',
-					electrodes: o.conductor.electrodes
+					electrodes: concerns(o.conductor, o.net)
 				})
 			);
 		for (const c of contacts)
@@ -153,7 +165,9 @@ export function checkGlass(design: Design): GlassReport {
 							? `${c.a.conductor.name} (${c.a.net.name}) touches ${c.b.conductor.name} (${c.b.net.name}) on the ${plate} plate.`
 							: `${c.a.conductor.name} (${c.a.net.name}) is ${(c.gap_mm * 1000).toFixed(0)} µm from ${c.b.conductor.name} (${c.b.net.name}) on the ${plate} plate, below the ${gap} mm minimum.`,
 					fix: 'Move or reroute the trace.',
-					electrodes: [...c.a.conductor.electrodes, ...c.b.conductor.electrodes]
+					electrodes: [
+						...new Set([...concerns(c.a.conductor, c.a.net), ...concerns(c.b.conductor, c.b.net)])
+					]
 				})
 			);
 	}
