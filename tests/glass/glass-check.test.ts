@@ -184,6 +184,33 @@ describe('ghosts, shorts and bad geometry', () => {
 		expect(opens.map((f) => f.electrodes)).toEqual([['e1']]);
 	});
 
+	it('names a transfer point off the seal, and one off the back glass', () => {
+		// The two-electrode glass (30 × 20 mm, ledge 3 mm at the bottom): the seal runs 0.5–1.5 mm
+		// in from the back glass's edge, so (10, 10) lies in the viewing area, (1, 10) under the
+		// seal, and (1e6, 10) far off the glass.
+		const d = twoElectrodes();
+		const routed = applyPatch(d, generateGlass(d));
+		const moved = (x: number, y: number): Design => ({
+			...routed,
+			glassArt: {
+				...routed.glassArt,
+				transfers: routed.glassArt.transfers.map((t) =>
+					t.common === 'com1' ? { ...t, x_mm: x, y_mm: y } : t
+				)
+			}
+		});
+		const off = (x: number, y: number) =>
+			checkGlass(moved(x, y)).findings.filter((f) => f.code === 'glass.transfer-off-seal');
+		expect(off(1, 10)).toEqual([]);
+		const inFluid = off(10, 10);
+		expect(inFluid.map((f) => [f.severity, f.electrodes])).toEqual([['warn', ['e1']]]);
+		expect(inFluid[0].location).toBeDefined();
+		const far = off(1e6, 10);
+		expect(far.map((f) => [f.severity, f.electrodes])).toEqual([['fail', ['e1']]]);
+		expect(far[0].location).toBeUndefined();
+		expect(far[0].message).toContain('COM1');
+	});
+
 	it("names the electrodes of both leads when a lead runs into another line's lead", () => {
 		// From E1 down to y = 12 and across the glass below E2, where SEG2's lead comes down
 		// from E2 (15–20 mm) to its pad: the two leads touch, and each serves one electrode.

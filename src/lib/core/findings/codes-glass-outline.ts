@@ -1,4 +1,4 @@
-/** Finding codes of bad leads on the glass drawing (off the glass, degenerate, on no net). */
+/** Finding codes of bad leads and transfer points on the glass drawing (off the glass, degenerate, on no net). */
 import type { FindingCode } from './codes';
 
 export const GLASS_OUTLINE_CODES: readonly FindingCode[] = [
@@ -13,5 +13,9 @@ export const GLASS_OUTLINE_CODES: readonly FindingCode[] = [
 	{
 		code: 'glass.trace-no-net',
 		meaning: 'a trace belongs to no common or segment line of its plate'
+	},
+	{
+		code: 'glass.transfer-off-seal',
+		meaning: 'a transfer point does not lie wholly under the seal, or lies off the back glass'
 	}
 ];

@@ -19,6 +19,7 @@ import { ghostCheck, type Ghost } from './ghost-check';
 import { ghostFindings } from './ghost-findings';
 import { outlineFaults } from './outline-faults';
 import { traceFindings } from './trace-findings';
+import { transferFindings } from './transfer-findings';
 
 export interface GlassReport {
 	artwork: GlassArtwork;
@@ -82,7 +83,11 @@ function ledgeFindings(design: Design, art: GlassArtwork): Finding[] {
 
 export function checkGlass(design: Design): GlassReport {
 	const art = buildArtwork(design);
-	const findings: Finding[] = [...ledgeFindings(design, art), ...traceFindings(design, art.layout)];
+	const findings: Finding[] = [
+		...ledgeFindings(design, art),
+		...traceFindings(design, art.layout),
+		...transferFindings(design, art.layout)
+	];
 	for (const f of outlineFaults(design, art.layout.sealInner)) {
 		const name = f.electrode.name || f.electrode.id;
 		findings.push(
