@@ -10,6 +10,7 @@ import type { Design } from '../design/schema';
 import { cellZone, viewingColumns, ZONE_DRY, ZONE_VIEW } from './crossing-zones';
 import type { GlassLayout } from './layout';
 import type { RouteGrid } from './route-grid';
+import { SpareArrays } from './spare-arrays';
 
 /** Extra cost of a cell in the viewing area: a quarter of a step (STEP_COST = 4 units). */
 const VIEW_COST = 1;
@@ -68,9 +69,8 @@ export function ghostLayers(options: {
 	});
 }
 
-/** Cost fields handed back by finished plates, kept for the next (one size at a time). */
-const spareFields: Float32Array[] = [];
-const SPARE_FIELDS = 12;
+/** Cost fields handed back by finished plates, kept for the next (filled afresh on taking). */
+const spareFields = new SpareArrays<Float32Array>((cells) => new Float32Array(cells), 12);
 
 export interface GhostCosts {
 	/** The cost field of a lead that lights these commons (shared between callers: read only). */
@@ -100,8 +100,7 @@ export function ghostCosts(options: {
 			const name = lit.join(',');
 			let cost = made.get(name);
 			if (cost) return cost;
-			const spare = spareFields.findIndex((f) => f.length === n);
-			cost = spare >= 0 ? spareFields.splice(spare, 1)[0].fill(0) : new Float32Array(n);
+			cost = spareFields.take(n).fill(0);
 			for (let iy = 0; iy < grid.ny; iy++) {
 				const [first, last] = viewRow(iy);
 				if (first <= last) cost.fill(VIEW_COST, iy * grid.nx + first, iy * grid.nx + last + 1);
@@ -115,10 +114,7 @@ export function ghostCosts(options: {
 			return cost;
 		},
 		release() {
-			for (const field of made.values()) {
-				if (spareFields.length === SPARE_FIELDS) spareFields.shift();
-				spareFields.push(field);
-			}
+			for (const field of made.values()) spareFields.give(field);
 			made.clear();
 		}
 	};

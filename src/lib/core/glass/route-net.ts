@@ -15,6 +15,7 @@ import type { XY } from '../geometry/vec';
 import { leadRing } from './rings';
 import type { GridSearch } from './grid-search';
 import type { RouteGrid } from './route-grid';
+import { SpareArrays } from './spare-arrays';
 
 export interface Terminal {
 	/** Electrode ids the terminal stands for (empty for a pad or transfer point). */
@@ -60,32 +61,9 @@ function cellBox(grid: RouteGrid, cells: readonly number[]): Box {
 	return box;
 }
 
-/** Cleared per-cell masks kept for the next net (a net returns its masks cleared when it is done). */
-const spareMasks: Uint8Array[] = [];
-const SPARE_MASKS = 8;
-
-function takeMask(cells: number): Uint8Array {
-	const i = spareMasks.findIndex((m) => m.length === cells);
-	return i >= 0 ? spareMasks.splice(i, 1)[0] : new Uint8Array(cells);
-}
-
-function giveMask(mask: Uint8Array): void {
-	if (spareMasks.length === SPARE_MASKS) spareMasks.shift();
-	spareMasks.push(mask);
-}
-
-/** The same for per-cell terminal indexes (0 = none, else terminal + 1). */
-const spareIndexes: Int32Array[] = [];
-
-function takeIndex(cells: number): Int32Array {
-	const i = spareIndexes.findIndex((m) => m.length === cells);
-	return i >= 0 ? spareIndexes.splice(i, 1)[0] : new Int32Array(cells);
-}
-
-function giveIndex(index: Int32Array): void {
-	if (spareIndexes.length === SPARE_MASKS) spareIndexes.shift();
-	spareIndexes.push(index);
-}
+/** Per-cell masks and terminal indexes (0 = none, else terminal + 1), handed back cleared. */
+const masks = new SpareArrays<Uint8Array>((cells) => new Uint8Array(cells), 8);
+const indexes = new SpareArrays<Int32Array>((cells) => new Int32Array(cells), 8);
 
 /** Up to this many pending terminals, one search from the tree looks for all of them at once. */
 const FEW_TERMINALS = 8;
@@ -122,12 +100,12 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 	const leads: XY[][] = [];
 	const unreached: Terminal[] = [];
 	if (terminals.length === 0) return { leads, unreached };
-	const inTree = takeMask(grid.nx * grid.ny);
+	const inTree = masks.take(grid.nx * grid.ny);
 	let targets: Uint8Array | null = null;
 	const treeCells: number[] = [];
 	// Which terminal each cell belongs to: one per cell in a shared index, any further ones (where
 	// terminals overlap) in a map beside it.
-	const firstAt = takeIndex(grid.nx * grid.ny);
+	const firstAt = indexes.take(grid.nx * grid.ny);
 	const moreAt = new Map<number, number[]>();
 	const cellsOf = terminals.map((t) => grid.cellsInside(t.ring));
 	cellsOf.forEach((cells, t) => {
@@ -201,7 +179,7 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 		}
 		if (pending.size <= FEW_TERMINALS) {
 			// Few terminals: search from the whole tree to all of them and take the cheapest reached.
-			targets ??= takeMask(grid.nx * grid.ny);
+			targets ??= masks.take(grid.nx * grid.ny);
 			const targetCells: number[] = [];
 			for (const p of pending)
 				for (const c of cellsOf[p]) {
@@ -258,9 +236,9 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 		yield;
 	}
 	for (const c of treeCells) inTree[c] = 0;
-	giveMask(inTree);
-	if (targets) giveMask(targets);
+	masks.give(inTree);
+	if (targets) masks.give(targets);
 	for (const cells of cellsOf) for (const c of cells) firstAt[c] = 0;
-	giveIndex(firstAt);
+	indexes.give(firstAt);
 	return { leads, unreached };
 }
