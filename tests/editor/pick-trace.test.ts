@@ -8,28 +8,8 @@ import { PickTool } from '$lib/editor/tools/pick-tool';
 import type { Trace } from '$lib/core/design/glass-art-schema';
 import type { Design } from '$lib/core/design/schema';
 import { activeTraces, allTraceNodeKeys } from '$lib/editor/trace-nodes';
-import { harness, testDesign } from './fixtures';
-
-const lead: Trace = {
-	id: 'ts-seg1-1',
-	plate: 'segment',
-	net: 'seg1',
-	width_mm: 0.1,
-	points: [
-		{ x: 30, y: 30 },
-		{ x: 30, y: 40 },
-		{ x: 40, y: 40 }
-	]
-};
-
-function withTrace(): Design {
-	const d = testDesign();
-	return { ...d, glassArt: { ...d.glassArt, traces: [lead] } };
-}
-
-const shown = { layers: { electrodes: true, plates: true } };
-const pointsOf = (d: Design) => d.glassArt.traces[0]?.points.map((p) => [p.x, p.y]);
-const del = { key: 'Delete', shift: false, alt: false, mod: false };
+import { harness } from './fixtures';
+import { del, lead, pointsOf, shown, withTrace } from './trace-fixture';
 
 describe('traces in the pick tool', () => {
 	it('a click on a trace picks the whole trace and drops the electrode selection', () => {

@@ -5,32 +5,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { PointsTool } from '$lib/editor/tools/points-tool';
-import type { Trace } from '$lib/core/design/glass-art-schema';
-import type { Design } from '$lib/core/design/schema';
 import { allTraceNodeKeys, parseTraceNodeKey, traceNodeKey } from '$lib/editor/trace-nodes';
 import { parseNodeKey } from '$lib/editor/node-refs';
-import { harness, testDesign } from './fixtures';
-
-const lead: Trace = {
-	id: 'ts-seg1-1',
-	plate: 'segment',
-	net: 'seg1',
-	width_mm: 0.1,
-	points: [
-		{ x: 30, y: 30 },
-		{ x: 30, y: 40 },
-		{ x: 40, y: 40 }
-	]
-};
-
-function withTrace(): Design {
-	const d = testDesign();
-	return { ...d, glassArt: { ...d.glassArt, traces: [lead] } };
-}
-
-const shown = { layers: { electrodes: true, plates: true } };
-const pointsOf = (d: Design) => d.glassArt.traces[0]?.points.map((p) => [p.x, p.y]);
-const del = { key: 'Delete', shift: false, alt: false, mod: false };
+import { harness } from './fixtures';
+import { del, lead, pointsOf, shown, withTrace } from './trace-fixture';
 
 describe('trace points in the points tool', () => {
 	it('keys of trace points never read as electrode points, and back', () => {
