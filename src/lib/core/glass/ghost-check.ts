@@ -122,12 +122,22 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 		)
 	);
 	const commonOf = new Map(design.electrodes.map((e) => [e.id, e.common]));
+	const lineOf = new Map(design.electrodes.map((e) => [e.id, e.line]));
 	const ghosts: Ghost[] = [];
 	nearPairs(front, back, 0, (i, j) => {
 		const f = front[i],
 			b = back[j];
 		if (!f.lead && !b.lead) return; // electrode over a back-plate piece: kept apart by construction
 		if (f.electrodes.length > 0 && commonOf.get(f.electrodes[0]) === b.net) return; // meant to face it
+		// A lead over the piece of its own line's electrode lies within the margin of that electrode
+		// wherever it overlaps: it only extends the electrode (the rule below), whatever the shape.
+		if (
+			f.lead &&
+			!b.lead &&
+			b.electrodes.length > 0 &&
+			b.electrodes.every((id) => lineOf.get(id) === f.net)
+		)
+			return;
 		const overlap = intersectRegions(f.rings, b.rings);
 		if (overlap.length === 0) return;
 		const pair = crossing.get(`${b.net}\u0000${f.net}`) ?? [];
