@@ -33,7 +33,7 @@ export const BEND_COST = 16;
 /** Queue pops the costed search may take before the plain shortest path is taken instead. */
 const COSTED_POPS = 60_000;
 /** Cells the fill before a search may sweep before it leaves the question to the search. */
-const QUICK_FILL_CELLS = 4096;
+const QUICK_FILL_CELLS = 512;
 /** Seeds pack (estimate, source index) in one number: the index below this, the estimate above. */
 const SEED_SCALE = 2 ** 24;
 const DX = Int32Array.of(1, -1, 0, 0);
