@@ -281,7 +281,10 @@ export class GridSearch {
 			if (target[cell] && !atSource) return this.path(state);
 			const ix = cell % nx;
 			const iy = (cell - ix) / nx;
+			// Never straight back: a lead that turns round is dearer than one that turned earlier.
+			const back = atSource ? -1 : heading ^ 1;
 			for (let h = 0; h < 4; h++) {
+				if (h === back) continue;
 				const jx = ix + DX[h],
 					jy = iy + DY[h];
 				if (jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
