@@ -5,10 +5,9 @@
  * out: eight bar steps per column, one common per step row (its back plates joined along the row
  * and out at the sides), one segment line per column (its steps joined up the column and down to
  * the pin right below it). Pins along the bottom at the column pitch (2.2 mm), commons split to
- * both ends. 504 electrodes
- * for `count` = 500 (whole columns).
+ * both ends. `count` electrodes: full columns, and the last one as full as the count allows.
  *
- * `crowdedGlassDesign`: a stress case that no router can finish cleanly: 4 commons by row over
+ * `crowdedGlassDesign`: a stress case the router cannot finish: 4 commons by row over
  * 20 rows of small bars, one segment line per four bars stacked in a column, 0.5 mm pins. Most
  * leads must cross other rows' buses in the viewing area and the pin row is narrower than the
  * columns; it times the router where it gives up.
@@ -43,7 +42,7 @@ export function benchGlassDesign(count: number): Design {
 	const commonOfStep = (step: number) => (step < steps / 2 ? step + 1 : steps + steps / 2 - step);
 	const electrodes: Electrode[] = [];
 	for (let col = 0; col < columns; col++)
-		for (let step = 0; step < steps; step++)
+		for (let step = 0; step < Math.min(steps, count - col * steps); step++)
 			electrodes.push({
 				id: `c${col + 1}s${step + 1}`,
 				name: `C${col + 1}S${step + 1}`,
