@@ -1,7 +1,8 @@
 /**
  * A design file whose glass drawing holds a lead far off the glass (a point at 1e300 mm) and one
  * that runs past the glass's edge opens without breaking the page: the glass panel names both
- * leads, and the canvas draws the plates and leads with the page still working.
+ * leads, and the canvas draws the plates and leads with the page still working. Likewise a
+ * transfer point far off the glass: named, and drawn around.
  */
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
@@ -68,5 +69,39 @@ test('a lead far off the glass opens without breaking the page and is named', as
 		await page.setViewportSize(size);
 		await page.screenshot({ path: `test-results/glass-bad-trace-${size.width}.png` });
 	}
+	expect(errors).toEqual([]);
+});
+
+test('a transfer point far off the glass opens without breaking the page and is named', async ({
+	page
+}) => {
+	const errors: string[] = [];
+	page.on('pageerror', (e) => errors.push(e.message));
+	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
+	if (!parsed.ok) throw new Error('the demo design does not parse');
+	const demo = parsed.design;
+	const glassArt = planGlass(demo).glassArt;
+	const far = serializeDesign({
+		...demo,
+		glassArt: {
+			...glassArt,
+			transfers: glassArt.transfers.map((t, i) => (i === 0 ? { ...t, x_mm: 1e300 } : t))
+		}
+	});
+	await page.goto('/');
+	await expect(page.locator('[data-hydrated="true"]')).toBeVisible({ timeout: 30_000 });
+	await page.getByTestId('file-input').setInputFiles({
+		name: 'far-transfer.json',
+		mimeType: 'application/json',
+		buffer: Buffer.from(far)
+	});
+	await page.getByTestId('view-glass').click();
+	const panel = page.getByTestId('glass-panel');
+	const named = panel.locator('[data-code="glass.transfer-off-seal"]');
+	await expect(named).toHaveCount(1, { timeout: 30_000 });
+	await expect(named).toContainText('lies off the back glass');
+	await page.getByTestId('glass-show-plates').check();
+	await expect(page.getByTestId('glass-show-plates')).toBeChecked();
+	await page.screenshot({ path: 'test-results/glass-far-transfer.png' });
 	expect(errors).toEqual([]);
 });
