@@ -1,9 +1,8 @@
 import { expect, test } from '@playwright/test';
 import { openApp } from './ready';
 import { readPlot } from './plot-reading';
-import { readFileSync } from 'node:fs';
-import { parseDesignText } from '../../src/lib/core/design/parse-design';
 import { analyzeCell } from '../../src/lib/core/cell/analyze-cell';
+import { demoFromFile } from './demo-file';
 
 test('the cell panel draws the predicted curves where the cell model puts them', async ({
 	page
@@ -11,9 +10,7 @@ test('the cell panel draws the predicted curves where the cell model puts them',
 	// The UI must show what the core cell model computes for the demo (the model itself is checked
 	// against published values in tests/lc and tests/optics); here the check is that each plot
 	// draws those numbers in the right place.
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	const demo = parsed.design;
+	const demo = demoFromFile();
 	const expected = analyzeCell(demo);
 	await openApp(page);
 	await page.getByTestId('view-cell').click();

@@ -5,21 +5,11 @@
  * and (COM4, SEG1) drives a bar step, so the crossing lights.
  */
 import { expect, type Page } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { parseDesignText } from '../../src/lib/core/design/parse-design';
-import { planGlass } from '../../src/lib/core/glass/plan-glass';
+import { demoFromFile, seg1Lead } from './demo-file';
 
 /** The corner of SEG1's generated lead that the flows drag, in glass millimetres. */
 export function seg1Corner(): { x: number; y: number } {
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	const design = parsed.design;
-	const seg1 = design.segmentLines.find((l) => l.name === 'SEG1')!;
-	const lead = planGlass(design).glassArt.traces.find(
-		(t) => t.plate === 'segment' && t.net === seg1.id && t.points.length >= 3
-	);
-	if (!lead) throw new Error('SEG1 has no lead with a corner');
-	return lead.points[1];
+	return seg1Lead(demoFromFile(), 3).points[1];
 }
 
 /** Drags the lead corner at `corner` (mm) to (22, 17) mm with the Points tool, plates shown. */

@@ -5,14 +5,12 @@
  * transfer point far off the glass: named, and drawn around.
  */
 import { expect, test } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { parseDesignText, serializeDesign } from '../../src/lib/core/design/parse-design';
+import { serializeDesign } from '../../src/lib/core/design/parse-design';
 import { planGlass } from '../../src/lib/core/glass/plan-glass';
+import { demoFromFile } from './demo-file';
 
 function badTraceDesign(): string {
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	const demo = parsed.design;
+	const demo = demoFromFile();
 	const glassArt = planGlass(demo).glassArt;
 	const line = demo.segmentLines[0].id;
 	const { width_mm: W, height_mm: H } = demo.glass;
@@ -77,9 +75,7 @@ test('a transfer point far off the glass opens without breaking the page and is 
 }) => {
 	const errors: string[] = [];
 	page.on('pageerror', (e) => errors.push(e.message));
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	const demo = parsed.design;
+	const demo = demoFromFile();
 	const glassArt = planGlass(demo).glassArt;
 	const far = serializeDesign({
 		...demo,

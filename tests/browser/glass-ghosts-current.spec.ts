@@ -5,18 +5,15 @@
  * the glass panel counts.
  */
 import { expect, test, type Page } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { parseDesignText } from '../../src/lib/core/design/parse-design';
 import { dragLeadIntoDigits, seg1Corner } from './ghost-lead';
+import { demoFromFile } from './demo-file';
 
 const ghostsInPanel = async (page: Page) =>
 	Number(/(\d+) ghost/.exec((await page.getByTestId('glass-trace-count').textContent())!)![1]);
 
 test('ghosts are drawn only for the drawing they were checked on', async ({ page }) => {
 	test.setTimeout(150_000);
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	const bar = parsed.design.electrodes.find((e) => e.name === '1A')!;
+	const bar = demoFromFile().electrodes.find((e) => e.name === '1A')!;
 	const centre = {
 		x: bar.outline.reduce((s, p) => s + p.x, 0) / bar.outline.length,
 		y: bar.outline.reduce((s, p) => s + p.y, 0) / bar.outline.length

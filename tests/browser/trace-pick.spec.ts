@@ -4,23 +4,15 @@
  * its width (one undo step), take it back; Delete removes it and undo brings it back.
  */
 import { expect, test } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { parseDesignText } from '../../src/lib/core/design/parse-design';
-import { planGlass } from '../../src/lib/core/glass/plan-glass';
+import { demoFromFile, seg1Lead } from './demo-file';
 
 test('a trace picked on the drawing shows its properties, takes a new width, and undo restores it', async ({
 	page
 }) => {
 	test.setTimeout(150_000);
 	// The routing the app's worker computes for the demo (the same core function, deterministic).
-	const parsed = parseDesignText(readFileSync('src/lib/core/design/demo-design.json', 'utf8'));
-	if (!parsed.ok) throw new Error('the demo design does not parse');
-	const design = parsed.design;
-	const seg1 = design.segmentLines.find((l) => l.name === 'SEG1')!;
-	const lead = planGlass(design).glassArt.traces.find(
-		(t) => t.plate === 'segment' && t.net === seg1.id && t.points.length >= 2
-	)!;
-	expect(lead).toBeDefined();
+	const design = demoFromFile();
+	const lead = seg1Lead(design, 2);
 	// the middle of its longest run outside the viewing area, where no electrode lies over it
 	const va = design.glass.viewingArea;
 	const outside = (p: { x: number; y: number }) =>

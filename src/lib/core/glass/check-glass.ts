@@ -176,7 +176,7 @@ export function checkGlass(design: Design): GlassReport {
 				})
 			);
 	}
-	const ghosts = ghostCheck(design, art);
+	const ghosts = ghostCheck(design, art, served);
 	findings.push(...ghostFindings(ghosts));
 	if (!findings.some((f) => f.severity !== 'pass'))
 		findings.push(

@@ -22,7 +22,7 @@ import { minimumGapBetweenRings } from '../geometry/minimum-gap';
 import { ringCentroid, signedArea } from '../geometry/polygon';
 import { intersectRegions, regionToPolygons } from '../geometry/polygon-clipper';
 import type { XY } from '../geometry/vec';
-import type { GlassArtwork } from './artwork';
+import type { Conductor, GlassArtwork } from './artwork';
 import { leadElectrodes } from './lead-reach';
 import { nearPairs } from './near-pairs';
 import { ringBounds } from './rings';
@@ -76,7 +76,15 @@ function place(art: GlassArtwork, viewing: Rect, p: XY): GhostPlace | null {
 	return null;
 }
 
-export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
+/**
+ * `served`: which electrodes each lead serves (`leadElectrodes` of the artwork's nets), when the
+ * caller has it already.
+ */
+export function ghostCheck(
+	design: Design,
+	art: GlassArtwork,
+	served: Map<Conductor, string[]> = leadElectrodes([...art.segment, ...art.common])
+): Ghost[] {
 	const near = design.glassArt.overlapMargin_mm + design.glassArt.traceWidth_mm;
 	const crossing = new Map<string, Electrode[]>();
 	for (const e of design.electrodes) {
@@ -88,7 +96,6 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 			n.conductors.filter((c) => c.kind === 'electrode').map((c) => [c.id, c.rings[0]] as const)
 		)
 	);
-	const reach = leadElectrodes([...art.segment, ...art.common]);
 	const front: Item[] = art.segment
 		.filter((n) => n.kind === 'segment')
 		.flatMap((n) =>
@@ -103,7 +110,7 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 						conductor: c.id,
 						lead: c.kind === 'trace',
 						electrodes: c.electrodes,
-						concerns: reach.get(c) ?? c.electrodes
+						concerns: served.get(c) ?? c.electrodes
 					}))
 				)
 		);
@@ -117,7 +124,7 @@ export function ghostCheck(design: Design, art: GlassArtwork): Ghost[] {
 				conductor: c.id,
 				lead: c.kind !== 'plate',
 				electrodes: c.electrodes,
-				concerns: reach.get(c) ?? c.electrodes
+				concerns: served.get(c) ?? c.electrodes
 			}))
 		)
 	);

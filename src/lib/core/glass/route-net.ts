@@ -12,7 +12,6 @@
  * (with the clearance) so later nets keep their distance.
  */
 import type { XY } from '../geometry/vec';
-import { leadRing } from './rings';
 import type { GridSearch } from './grid-search';
 import type { RouteGrid } from './route-grid';
 import { SpareArrays } from './spare-arrays';
@@ -152,20 +151,19 @@ export function* growNet(options: NetOptions): Generator<void, NetRoute> {
 		const lead = cellsToPolyline(grid, cells);
 		leads.push(lead);
 		const half = width_mm / 2;
+		// A lead steps from cell to neighbouring cell, so each run is straight along x or y and its
+		// ring is a rectangle.
 		for (let i = 1; i < lead.length; i++) {
 			const a = lead[i - 1],
 				b = lead[i];
-			// Runs between cell centres are straight along x or y: their ring is a rectangle.
-			if (a.x === b.x || a.y === b.y)
-				grid.claimBox(
-					Math.min(a.x, b.x) - half,
-					Math.min(a.y, b.y) - half,
-					Math.max(a.x, b.x) + half,
-					Math.max(a.y, b.y) + half,
-					net,
-					clearance_mm
-				);
-			else grid.claim(leadRing({ a, b, width_mm }), net, clearance_mm);
+			grid.claimBox(
+				Math.min(a.x, b.x) - half,
+				Math.min(a.y, b.y) - half,
+				Math.max(a.x, b.x) + half,
+				Math.max(a.y, b.y) + half,
+				net,
+				clearance_mm
+			);
 		}
 		join(cells);
 	};

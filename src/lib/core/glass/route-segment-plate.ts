@@ -102,14 +102,15 @@ function routeSegmentAttempt(options: {
 	const costOf = ghostCosts({ design, layout, grid, conductors: commonConductors });
 	const traces: Trace[] = [];
 	const unrouted: Unrouted[] = [];
-	const keptNets = new Set(kept.map((t) => t.net));
-	nets.forEach(({ pad }, net) => {
-		if (!keptNets.has(pad.net)) return;
-		for (const t of kept.filter((k) => k.net === pad.net)) {
-			traces.push(t);
-			for (const ring of traceRings(t)) grid.claim(ring, net, clearance);
-		}
-	});
+	const netIndex = new Map(nets.map((n, k) => [n.pad.net, k]));
+	const keptNets = new Set<string>();
+	for (const t of kept) {
+		const net = netIndex.get(t.net);
+		if (net === undefined) continue;
+		keptNets.add(t.net);
+		traces.push(t);
+		for (const ring of traceRings(t)) grid.claim(ring, net, clearance);
+	}
 	let missed = 0;
 	nets.forEach(({ pad, terminals, lit }, net) => {
 		if (keptNets.has(pad.net)) return;

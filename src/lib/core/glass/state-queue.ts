@@ -23,18 +23,14 @@ export class StateQueue {
 	private state = new Int32Array(1024);
 	private used = 0;
 	private count = 0;
-	/** Lowest priority that may still hold entries; the highest pushed (-1: none yet). */
+	/** Lowest priority that may still hold entries; the highest pushed. */
 	private low = 0;
-	private high = -1;
+	private high = -Infinity;
 	/** Priority of the last entry popped: nothing lower may come in while in bucket mode. */
 	private floor = 0;
 	private heapMode = false;
 	private readonly heap = new StateHeap();
-	/**
-	 * Cost so far of the last entry popped, in a typed slot: a number field that holds whole and
-	 * fractional values in turn would box each one on the heap, once per pop.
-	 */
-	private readonly lastG = new Float64Array(1);
+	private lastG = 0;
 
 	get size(): number {
 		return this.heapMode ? this.heap.size : this.count;
@@ -44,7 +40,7 @@ export class StateQueue {
 		if (this.count > 0) this.head.fill(-1);
 		this.used = 0;
 		this.count = 0;
-		this.high = -1;
+		this.high = -Infinity;
 		this.floor = 0;
 		this.heapMode = false;
 		this.heap.clear();
@@ -78,11 +74,16 @@ export class StateQueue {
 	/** The lowest priority waiting (Infinity when empty). */
 	peekF(): number {
 		if (this.heapMode) return this.heap.size > 0 ? this.heap.topF() : Infinity;
-		if (this.count === 0) return Infinity;
+		return this.count === 0 ? Infinity : this.lowestFull();
+	}
+
+	/** The lowest priority whose bucket holds an entry, kept as `low` (bucket mode, entries waiting). */
+	private lowestFull(): number {
 		const head = this.head,
 			mask = this.mask;
 		let f = this.low;
-		while (head[f & mask] < 0) f++;
+		while (head[f & mask] < 0)
+			if (++f > this.high) throw new Error('state queue: lost its entries');
 		this.low = f;
 		return f;
 	}
@@ -90,25 +91,21 @@ export class StateQueue {
 	/** Removes an entry of the lowest priority and returns its state; `poppedG` is its cost so far. */
 	pop(): number {
 		if (this.heapMode) {
-			this.lastG[0] = this.heap.topG();
+			this.lastG = this.heap.topG();
 			return this.heap.pop();
 		}
-		const head = this.head,
-			mask = this.mask;
-		let f = this.low;
-		while (head[f & mask] < 0)
-			if (++f > this.high) throw new Error('state queue: lost its entries');
-		this.low = this.floor = f;
-		const e = head[f & mask];
-		head[f & mask] = this.next[e];
+		const f = (this.floor = this.lowestFull());
+		const b = f & this.mask;
+		const e = this.head[b];
+		this.head[b] = this.next[e];
 		this.count--;
-		this.lastG[0] = this.g[e];
+		this.lastG = this.g[e];
 		return this.state[e];
 	}
 
 	/** Cost so far of the entry the last `pop()` returned. */
 	get poppedG(): number {
-		return this.lastG[0];
+		return this.lastG;
 	}
 
 	private growPool(): void {
