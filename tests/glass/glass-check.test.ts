@@ -57,6 +57,22 @@ describe('back plates', () => {
 });
 
 describe('generation', () => {
+	it('names a glass too large to route at its pitch instead of failing inside the router', () => {
+		// 2000 × 2000 mm at a 0.005 + 0.005 mm pitch: about (1999.4 / 0.01)² ≈ 4·10¹⁰ grid cells,
+		// far above the router's 8 million.
+		const d = twoElectrodes();
+		const huge: Design = {
+			...d,
+			glass: { ...d.glass, width_mm: 2000, height_mm: 2000 },
+			glassArt: { ...d.glassArt, traceWidth_mm: 0.005 },
+			rules: { ...d.rules, minGap_mm: 0.005 }
+		};
+		const plan = planGlass(huge);
+		expect(plan.glassArt.traces).toEqual([]);
+		expect(plan.findings.map((f) => [f.code, f.severity])).toEqual([['glass.no-route', 'fail']]);
+		expect(plan.findings[0].message).toContain('too large to route');
+	});
+
 	it('routes every electrode to its pad, passes the check, and undoes exactly', () => {
 		const d = twoElectrodes();
 		expect(codes(d)).toContain('glass.open');

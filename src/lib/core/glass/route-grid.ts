@@ -14,6 +14,13 @@ import { ringBounds } from './rings';
 
 export const FREE = -1;
 export const BLOCKED = -2;
+/** Most cells a routing grid may have (its search scratch is about 100 bytes a cell). */
+export const MAX_GRID_CELLS = 8_000_000;
+
+/** Cells of the routing grid over `domain` at a pitch of `cell_mm`. */
+export const gridCells = (domain: Rect, cell_mm: number): number =>
+	Math.max(1, Math.floor(domain.width_mm / cell_mm)) *
+	Math.max(1, Math.floor(domain.height_mm / cell_mm));
 
 function distanceToRing2(ring: Float64Array, px: number, py: number): number {
 	let best = Infinity;
@@ -59,7 +66,7 @@ export class RouteGrid {
 		this.y0 = domain.y_mm;
 		this.nx = Math.max(1, Math.floor(domain.width_mm / cell_mm));
 		this.ny = Math.max(1, Math.floor(domain.height_mm / cell_mm));
-		if (this.nx * this.ny > 8_000_000)
+		if (this.nx * this.ny > MAX_GRID_CELLS)
 			throw new RangeError('the glass is too large for the routing grid at this trace pitch');
 	}
 
